@@ -1,0 +1,26 @@
+// Two projects: the hub (node, SWC) and the app (jsdom, Angular preset, zoneless).
+const { createCjsPreset } = require('jest-preset-angular/presets');
+
+/** @type {import('jest').Config} */
+module.exports = {
+  projects: [
+    {
+      displayName: 'hub',
+      testEnvironment: 'node',
+      roots: ['<rootDir>/test/server'],
+      testMatch: ['**/*.test.ts'],
+      transform: {
+        '^.+\\.ts$': ['@swc/jest', { jsc: { parser: { syntax: 'typescript' }, target: 'es2022' } }],
+      },
+      globalSetup: '<rootDir>/test/server/support/global-setup.ts',
+      setupFiles: ['<rootDir>/test/server/support/worker-database.ts'],
+    },
+    {
+      displayName: 'app',
+      ...createCjsPreset({ tsconfig: '<rootDir>/tsconfig.spec.json' }),
+      roots: ['<rootDir>/src'],
+      testMatch: ['**/*.spec.ts'],
+      setupFilesAfterEnv: ['<rootDir>/src/test-setup.ts'],
+    },
+  ],
+};

@@ -1,0 +1,58 @@
+import { io as connect, type Socket } from 'socket.io-client';
+import request from 'supertest';
+import type { ClientToServerEvents, ServerToClientEvents } from '../../src/shared/socket-contract';
+import { readEnv } from '../../server/config/env';
+import { startHub, type RunningHub } from '../../server/hub';
+import { DEMO_ACCOUNTS } from '../../seeds/demo-accounts';
+
+type ClientSocket = Socket<ServerToClientEvents, ClientToServerEvents>;
+
+let hub: RunningHub;
+const sockets: ClientSocket[] = [];
+
+beforeAll(async () => {
+  const env = readEnv({ ...process.env, NODE_ENV: 'test', PORT: '0', HOST: '127.0.0.1', LOG_LEVEL: 'silent', SESSION_SECRET: 'x'.repeat(40) });
+  hub = await startHub(env, process.env['DATABASE_URL']!);
+});
+afterAll(async () => {
+  sockets.forEach((socket) => socket.disconnect());
+  await hub.close();
+});
+
+function open(cookie?: string): ClientSocket {
+  const socket: ClientSocket = connect(hub.url, { transports: ['websocket'], reconnection: false, extraHeaders: cookie ? { cookie } : {} });
+  sockets.push(socket);
+  return socket;
+}
+
+const cookieOf = (res: request.Response) => (res.headers['set-cookie'] as unknown as string[])[0]!.split(';')[0]!;
+
+describe('the socket server', () => {
+  it('refuses a connection with no session, saying to sign in', async () => {
+    const socket = open();
+    const error = await new Promise<Error>((resolve) => socket.on('connect_error', resolve));
+    expect(error.message).toBe('Sign in first.');
+  });
+
+  it('acknowledges an operator\'s ping, records the station as seen and tells the lead', async () => {
+    const leadLogin = await request(hub.url).post('/api/auth/login').send({ email: DEMO_ACCOUNTS.lead.email, password: DEMO_ACCOUNTS.lead.password }).expect(200);
+    const leadCookie = cookieOf(leadLogin);
+    const station = await hub.db('stations').where({ name: 'Pack 1' }).first();
+    const paired = await request(hub.url).post(`/api/stations/${station!.id}/pair`).set('Cookie', leadCookie).expect(201);
+    const operator = DEMO_ACCOUNTS.operators[0];
+    const pinLogin = await request(hub.url).post('/api/auth/pin').send({ deviceToken: paired.body.deviceToken, pin: operator.pin }).expect(200);
+
+    const lead = open(leadCookie);
+    await new Promise<void>((resolve) => lead.on('connect', () => resolve()));
+    const seen = new Promise<{ stationId: number; lastSeenAt: string }>((resolve) => lead.on('station:seen', resolve));
+
+    const tablet = open(cookieOf(pinLogin));
+    const reply = await tablet.timeout(5000).emitWithAck('presence:ping');
+    expect(reply).toMatchObject({ role: 'operator', stationId: station!.id });
+
+    const update = await seen;
+    expect(update.stationId).toBe(station!.id);
+    const stored = await hub.db('stations').where({ id: station!.id }).first();
+    expect(stored!.last_seen_at!.toISOString()).toBe(update.lastSeenAt);
+  });
+});

@@ -1,0 +1,3 @@
+import { workerDatabaseUrl } from './test-database';
+
+process.env['DATABASE_URL'] = workerDatabaseUrl();
