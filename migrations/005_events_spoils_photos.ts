@@ -7,7 +7,8 @@ export async function up(knex: Knex): Promise<void> {
   // The client's UUID is the key, so a replayed event is recognised and not counted twice.
   await knex.schema.createTable('events', (t) => {
     t.uuid('id').primary();
-    t.bigIncrements('seq', { primaryKey: false }); // arrival order at the hub
+    // Arrival order at the hub. Knex's bigIncrements without a primary key drops AUTO_INCREMENT on MariaDB.
+    t.specificType('seq', 'BIGINT UNSIGNED NOT NULL AUTO_INCREMENT UNIQUE');
     t.integer('bag_id').unsigned().nullable().references('bags.id');
     t.integer('station_id').unsigned().nullable().references('stations.id');
     t.integer('user_id').unsigned().nullable().references('users.id');

@@ -1,5 +1,5 @@
 import os from 'node:os';
-import { DEMO_ACCOUNTS } from '../../seeds/demo-accounts';
+import { DEMO_ACCOUNTS } from '../../seeds/data/demo-accounts';
 import { readEnv } from '../config/env';
 import { prepareDatabase } from '../db/prepare';
 import { startHub } from '../hub';

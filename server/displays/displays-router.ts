@@ -4,11 +4,11 @@ import { allowRoles } from '../auth/guards';
 import { hashDeviceToken, newDeviceToken } from '../auth/secrets';
 import type { Db } from '../db/tables';
 import { notFound } from '../http/http-error';
-import { validate } from '../http/validate';
+import { idParams, validate } from '../http/validate';
 import { DisplaysRepository } from './displays-repository';
 
 const createBody = z.object({ name: z.string().trim().min(1, 'Give the display a name, e.g. "Wall by the presses".').max(80) });
-const idParams = z.object({ id: z.coerce.number().int().positive('A display id is a whole number.') });
+const displayParams = idParams('display');
 
 /** /api/displays: wall screens that may read the floor board, each with its own revocable token. */
 export function displaysRouter(db: Db): Router {
@@ -29,7 +29,7 @@ export function displaysRouter(db: Db): Router {
   });
 
   router.delete('/:id', leads, async (req, res) => {
-    const { id } = validate(idParams, req.params, 'display address');
+    const { id } = validate(displayParams, req.params, 'display address');
     if (!(await displays.revoke(id))) throw notFound(`There is no active display ${id}.`);
     res.status(204).end();
   });

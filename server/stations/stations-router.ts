@@ -1,14 +1,13 @@
 import { Router } from 'express';
-import { z } from 'zod';
 import type { PairReply, StationListItem } from '../../src/shared/auth-contract';
 import { allowRoles } from '../auth/guards';
 import { hashDeviceToken, newDeviceToken } from '../auth/secrets';
 import type { Db, StationRow } from '../db/tables';
 import { notFound } from '../http/http-error';
-import { validate } from '../http/validate';
+import { idParams, validate } from '../http/validate';
 import { StationsRepository } from './stations-repository';
 
-const idParams = z.object({ id: z.coerce.number().int().positive('A station id is a whole number.') });
+const stationParams = idParams('station');
 
 const toListItem = (row: StationRow): StationListItem => ({
   id: row.id,
@@ -36,7 +35,7 @@ export function stationsRouter(db: Db): Router {
   });
 
   router.post('/:id/pair', leads, async (req, res) => {
-    const { id } = validate(idParams, req.params, 'station address');
+    const { id } = validate(stationParams, req.params, 'station address');
     const station = await findOr404(id);
     const deviceToken = newDeviceToken();
     await stations.pair(id, hashDeviceToken(deviceToken), req.principal!.userId!);
@@ -45,7 +44,7 @@ export function stationsRouter(db: Db): Router {
   });
 
   router.delete('/:id/pair', leads, async (req, res) => {
-    const { id } = validate(idParams, req.params, 'station address');
+    const { id } = validate(stationParams, req.params, 'station address');
     await findOr404(id);
     await stations.unpair(id);
     res.status(204).end();

@@ -1,5 +1,5 @@
 import request from 'supertest';
-import { DEMO_ACCOUNTS } from '../../seeds/demo-accounts';
+import { DEMO_ACCOUNTS } from '../../seeds/data/demo-accounts';
 import { pairStation, signedInOperator, signedInPerson, testApp } from './support/test-hub';
 
 const hub = testApp();

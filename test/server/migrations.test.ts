@@ -37,4 +37,15 @@ describe('migrations', () => {
     const [{ n }] = (await db('users').count({ n: '*' })) as [{ n: number }];
     expect(Number(n)).toBeGreaterThanOrEqual(6);
   });
+
+  it('number events in arrival order by themselves', async () => {
+    await db.migrate.latest();
+    const event = (id: string) => ({ id, kind: 'scan' as const, client_at: new Date(), payload: db.raw('?', ['{}']) });
+    await db('events').insert(event('00000000-0000-4000-8000-000000000001'));
+    await db('events').insert(event('00000000-0000-4000-8000-000000000002'));
+    const rows = await db('events').select('id', 'seq').orderBy('seq');
+    expect(rows.map((row) => row.id)).toEqual(['00000000-0000-4000-8000-000000000001', '00000000-0000-4000-8000-000000000002']);
+    expect(rows[1]!.seq).toBeGreaterThan(rows[0]!.seq);
+    await db('events').delete();
+  });
 });

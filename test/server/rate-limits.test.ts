@@ -1,5 +1,5 @@
 import request from 'supertest';
-import { DEMO_ACCOUNTS } from '../../seeds/demo-accounts';
+import { DEMO_ACCOUNTS } from '../../seeds/data/demo-accounts';
 import { pairStation, testApp } from './support/test-hub';
 
 // A low limit keeps the test short; the rule is the same at the default of 10.

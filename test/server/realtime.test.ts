@@ -3,7 +3,7 @@ import request from 'supertest';
 import type { ClientToServerEvents, ServerToClientEvents } from '../../src/shared/socket-contract';
 import { readEnv } from '../../server/config/env';
 import { startHub, type RunningHub } from '../../server/hub';
-import { DEMO_ACCOUNTS } from '../../seeds/demo-accounts';
+import { DEMO_ACCOUNTS } from '../../seeds/data/demo-accounts';
 
 type ClientSocket = Socket<ServerToClientEvents, ClientToServerEvents>;
 

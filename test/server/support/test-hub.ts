@@ -5,7 +5,7 @@ import { createApp } from '../../../server/app';
 import { readEnv, type Env } from '../../../server/config/env';
 import { knexConfig } from '../../../server/db/connection';
 import type { Db } from '../../../server/db/tables';
-import { DEMO_ACCOUNTS } from '../../../seeds/demo-accounts';
+import { DEMO_ACCOUNTS } from '../../../seeds/data/demo-accounts';
 
 /** The hub's app on this worker's real MariaDB database, for supertest. */
 export function testApp(overrides: Partial<Env> = {}) {
