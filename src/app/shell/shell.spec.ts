@@ -1,0 +1,84 @@
+import { ComponentFixture, TestBed } from '@angular/core/testing';
+import { importProvidersFrom, provideZonelessChangeDetection } from '@angular/core';
+import { provideHttpClient } from '@angular/common/http';
+import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
+import { Router, provideRouter } from '@angular/router';
+import { MatIconTestingModule } from '@angular/material/icon/testing';
+import { Role, Session } from '../auth/session';
+import { Shell } from './shell';
+
+describe('Shell', () => {
+  let fixture: ComponentFixture<Shell>;
+  let http: HttpTestingController;
+  let navigate: jest.SpyInstance;
+
+  async function renderSignedInAs(role: Role): Promise<void> {
+    TestBed.configureTestingModule({
+      imports: [Shell],
+      providers: [
+        provideZonelessChangeDetection(),
+        provideRouter([]),
+        provideHttpClient(),
+        provideHttpClientTesting(),
+        importProvidersFrom(MatIconTestingModule),
+      ],
+    });
+    http = TestBed.inject(HttpTestingController);
+    navigate = jest.spyOn(TestBed.inject(Router), 'navigateByUrl').mockResolvedValue(true);
+    const signedIn = TestBed.inject(Session).signIn('x@example.test', 'pw');
+    http.expectOne('/api/auth/login').flush({
+      user: { id: 5, name: 'Noor Bellweather', email: 'x@example.test', role },
+      station: null,
+    });
+    await signedIn;
+    fixture = TestBed.createComponent(Shell);
+    await fixture.whenStable();
+  }
+
+  function navLabels(): string[] {
+    const links = (fixture.nativeElement as HTMLElement).querySelectorAll('[data-testid=nav-entry]');
+    return Array.from(links, (link) => link.textContent?.trim() ?? '');
+  }
+
+  afterEach(() => http.verify());
+
+  it('offers a lead the Stations screen and not the station home', async () => {
+    await renderSignedInAs('lead');
+
+    expect(navLabels()).toEqual(['Stations']);
+  });
+
+  it('offers an owner the Stations screen', async () => {
+    await renderSignedInAs('owner');
+
+    expect(navLabels()).toEqual(['Stations']);
+  });
+
+  it('offers an operator only the station home', async () => {
+    await renderSignedInAs('operator');
+
+    expect(navLabels()).toEqual(['Station home']);
+  });
+
+  it('shows who is signed in and their role', async () => {
+    await renderSignedInAs('lead');
+
+    const person = (fixture.nativeElement as HTMLElement).querySelector('[data-testid=signed-in-person]');
+    expect(person?.textContent).toContain('Noor Bellweather');
+    expect(person?.textContent).toContain('Lead');
+  });
+
+  it('signs out on the hub and returns an operator to the PIN pad', async () => {
+    await renderSignedInAs('operator');
+
+    const signOut = Array.from((fixture.nativeElement as HTMLElement).querySelectorAll('button')).find((b) =>
+      b.textContent?.includes('Sign out'),
+    )!;
+    signOut.click();
+    http.expectOne({ method: 'POST', url: '/api/auth/logout' }).flush(null, { status: 204, statusText: 'No Content' });
+    await new Promise((resolve) => setTimeout(resolve));
+
+    expect(TestBed.inject(Session).signedIn()).toBe(false);
+    expect(navigate).toHaveBeenCalledWith('/station');
+  });
+});

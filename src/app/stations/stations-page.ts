@@ -1,0 +1,80 @@
+import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
+import { DatePipe } from '@angular/common';
+import { Router } from '@angular/router';
+import { toSignal } from '@angular/core/rxjs-interop';
+import { catchError, map, of, startWith } from 'rxjs';
+import { MatButtonModule } from '@angular/material/button';
+import { MatIconModule } from '@angular/material/icon';
+import { apiErrorSentence } from '../core/api-error';
+import { DevicePairing } from '../auth/device-pairing';
+import { Session } from '../auth/session';
+import { KIND_DISPLAY } from './station-kinds';
+import { StationListItem, StationsApi } from './stations-api';
+
+type StationsState =
+  | { status: 'loading' }
+  | { status: 'loaded'; stations: StationListItem[] }
+  | { status: 'failed'; sentence: string };
+
+/** The shop's stations for an owner or lead, and pairing this tablet with one of them. */
+@Component({
+  selector: 'dw-stations-page',
+  imports: [DatePipe, MatButtonModule, MatIconModule],
+  templateUrl: './stations-page.html',
+  styleUrl: './stations-page.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class StationsPage {
+  private readonly session = inject(Session);
+  private readonly router = inject(Router);
+  protected readonly pairing = inject(DevicePairing);
+  protected readonly kinds = KIND_DISPLAY;
+
+  protected readonly state = toSignal(
+    inject(StationsApi)
+      .list()
+      .pipe(
+        map((stations): StationsState => ({ status: 'loaded', stations })),
+        catchError((error: unknown) => of<StationsState>({ status: 'failed', sentence: apiErrorSentence(error) })),
+        startWith<StationsState>({ status: 'loading' }),
+      ),
+    { requireSync: true },
+  );
+  protected readonly stations = computed(() => {
+    const state = this.state();
+    return state.status === 'loaded' ? state.stations : null;
+  });
+  protected readonly failure = computed(() => {
+    const state = this.state();
+    return state.status === 'failed' ? state.sentence : null;
+  });
+  protected readonly confirmation = signal<string | null>(null);
+  protected readonly problem = signal<string | null>(null);
+  protected readonly pairingId = signal<number | null>(null);
+
+  protected async pairThisTablet(station: StationListItem): Promise<void> {
+    this.problem.set(null);
+    this.confirmation.set(null);
+    this.pairingId.set(station.id);
+    try {
+      const paired = await this.pairing.pairThisTablet(station.id);
+      this.confirmation.set(
+        `This tablet is now the ${paired.name} station. Operators sign in here with their PIN.`,
+      );
+    } catch (error) {
+      this.problem.set(apiErrorSentence(error, 'Pairing did not work. Try again.'));
+    } finally {
+      this.pairingId.set(null);
+    }
+  }
+
+  protected unpairThisTablet(): void {
+    this.pairing.forget();
+    this.confirmation.set('This tablet is no longer a station.');
+  }
+
+  protected async handOverToOperators(): Promise<void> {
+    await this.session.signOut();
+    await this.router.navigateByUrl('/station');
+  }
+}

@@ -1,0 +1,5 @@
+/** SVG files are bundled as their text (angular.json `loader` ".svg": "text"). */
+declare module '*.svg' {
+  const text: string;
+  export default text;
+}
