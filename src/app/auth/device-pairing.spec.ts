@@ -69,4 +69,31 @@ describe('DevicePairing', () => {
     expect(storage.getItem(DEVICE_TOKEN_KEY)).toBeNull();
     expect(pairing.paired()).toBe(false);
   });
+
+  it('unpairs the station on the hub before forgetting the token', async () => {
+    const pairing = setUp();
+    const paired = pairing.pairThisTablet(7);
+    http.expectOne('/api/stations/7/pair').flush({ deviceToken: 'tok-abc', station: { id: 7, name: 'Press 2', kind: 'press' } });
+    await paired;
+
+    const unpaired = pairing.unpairThisTablet();
+    http.expectOne({ method: 'DELETE', url: '/api/stations/7/pair' }).flush(null, { status: 204, statusText: 'No Content' });
+    await unpaired;
+
+    expect(storage.getItem(DEVICE_TOKEN_KEY)).toBeNull();
+    expect(pairing.paired()).toBe(false);
+  });
+
+  it('keeps the token when the hub refuses to unpair, so the tablet still works', async () => {
+    const pairing = setUp();
+    const paired = pairing.pairThisTablet(7);
+    http.expectOne('/api/stations/7/pair').flush({ deviceToken: 'tok-abc', station: { id: 7, name: 'Press 2', kind: 'press' } });
+    await paired;
+
+    const unpaired = pairing.unpairThisTablet();
+    http.expectOne('/api/stations/7/pair').flush({ error: 'Sign in first.' }, { status: 401, statusText: 'Unauthorized' });
+
+    await expect(unpaired).rejects.toBeTruthy();
+    expect(storage.getItem(DEVICE_TOKEN_KEY)).toBe('tok-abc');
+  });
 });

@@ -34,6 +34,15 @@ export class DevicePairing {
     return response.station;
   }
 
+  /** Unpairs the station on the hub (ending its operators' sessions), then forgets the token here. */
+  async unpairThisTablet(): Promise<void> {
+    const station = this.pairedStation();
+    if (station) {
+      await firstValueFrom(this.http.delete<void>(`/api/stations/${encodeURIComponent(station.id)}/pair`));
+    }
+    this.forget();
+  }
+
   /** Drops this tablet's device token; it is no longer a station. */
   forget(): void {
     this.storage.removeItem(DEVICE_TOKEN_KEY);

@@ -67,6 +67,8 @@ describe('StationsPage', () => {
       station: { id: 2, name: 'Press 1', kind: 'press' },
     });
     await settle();
+    http.expectOne({ method: 'GET', url: '/api/stations' }).flush(STATIONS.map((s) => (s.id === 2 ? { ...s, paired: true } : s)));
+    await settle();
 
     expect(element().querySelector('[data-testid=pairing-confirmation]')?.textContent?.trim()).toBe(
       'This tablet is now the Press 1 station. Operators sign in here with their PIN.',
@@ -75,15 +77,20 @@ describe('StationsPage', () => {
     expect(element().textContent).toContain('Unpair this tablet');
   });
 
-  it('unpairs this tablet', async () => {
+  it('unpairs this tablet on the hub and forgets its token', async () => {
     element().querySelectorAll('[data-testid=station-card]')[1].querySelector<HTMLButtonElement>('button')!.click();
     http.expectOne('/api/stations/2/pair').flush({ deviceToken: 'tok-press', station: { id: 2, name: 'Press 1', kind: 'press' } });
+    await settle();
+    http.expectOne({ method: 'GET', url: '/api/stations' }).flush(STATIONS);
     await settle();
 
     Array.from(element().querySelectorAll('button'))
       .find((button) => button.textContent?.includes('Unpair this tablet'))!
       .click();
-    await fixture.whenStable();
+    http.expectOne({ method: 'DELETE', url: '/api/stations/2/pair' }).flush(null, { status: 204, statusText: 'No Content' });
+    await settle();
+    http.expectOne({ method: 'GET', url: '/api/stations' }).flush(STATIONS);
+    await settle();
 
     expect(storage.getItem(DEVICE_TOKEN_KEY)).toBeNull();
     expect(element().textContent).not.toContain('Unpair this tablet');

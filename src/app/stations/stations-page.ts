@@ -1,8 +1,8 @@
 import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
 import { DatePipe } from '@angular/common';
 import { Router } from '@angular/router';
-import { toSignal } from '@angular/core/rxjs-interop';
-import { catchError, map, of, startWith } from 'rxjs';
+import { toObservable, toSignal } from '@angular/core/rxjs-interop';
+import { catchError, map, of, switchMap } from 'rxjs';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { apiErrorSentence } from '../core/api-error';
@@ -30,15 +30,19 @@ export class StationsPage {
   protected readonly pairing = inject(DevicePairing);
   protected readonly kinds = KIND_DISPLAY;
 
+  private readonly api = inject(StationsApi);
+  private readonly loads = signal(0);
+
   protected readonly state = toSignal(
-    inject(StationsApi)
-      .list()
-      .pipe(
-        map((stations): StationsState => ({ status: 'loaded', stations })),
-        catchError((error: unknown) => of<StationsState>({ status: 'failed', sentence: apiErrorSentence(error) })),
-        startWith<StationsState>({ status: 'loading' }),
+    toObservable(this.loads).pipe(
+      switchMap(() =>
+        this.api.list().pipe(
+          map((stations): StationsState => ({ status: 'loaded', stations })),
+          catchError((error: unknown) => of<StationsState>({ status: 'failed', sentence: apiErrorSentence(error) })),
+        ),
       ),
-    { requireSync: true },
+    ),
+    { initialValue: { status: 'loading' } as StationsState },
   );
   protected readonly stations = computed(() => {
     const state = this.state();
@@ -61,6 +65,7 @@ export class StationsPage {
       this.confirmation.set(
         `This tablet is now the ${paired.name} station. Operators sign in here with their PIN.`,
       );
+      this.reload();
     } catch (error) {
       this.problem.set(apiErrorSentence(error, 'Pairing did not work. Try again.'));
     } finally {
@@ -68,9 +73,20 @@ export class StationsPage {
     }
   }
 
-  protected unpairThisTablet(): void {
-    this.pairing.forget();
-    this.confirmation.set('This tablet is no longer a station.');
+  protected async unpairThisTablet(): Promise<void> {
+    this.problem.set(null);
+    this.confirmation.set(null);
+    try {
+      await this.pairing.unpairThisTablet();
+      this.confirmation.set('This tablet is no longer a station. Its operators have been signed out.');
+      this.reload();
+    } catch (error) {
+      this.problem.set(apiErrorSentence(error, 'Unpairing did not work. Try again.'));
+    }
+  }
+
+  private reload(): void {
+    this.loads.update((n) => n + 1);
   }
 
   protected async handOverToOperators(): Promise<void> {
