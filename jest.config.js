@@ -7,11 +7,14 @@ module.exports = {
     {
       displayName: 'hub',
       testEnvironment: 'node',
-      roots: ['<rootDir>/test/server'],
+      roots: ['<rootDir>/test/server', '<rootDir>/test/domain'],
       testMatch: ['**/*.test.ts'],
       transform: {
         '^.+\\.ts$': ['@swc/jest', { jsc: { parser: { syntax: 'typescript' }, target: 'es2022' } }],
+        // ESM-only packages from npm, turned into CommonJS for jest.
+        '^.+/node_modules/(potpack)/.+\\.js$': ['@swc/jest', { jsc: { target: 'es2022' }, module: { type: 'commonjs' } }],
       },
+      transformIgnorePatterns: ['/node_modules/(?!(potpack)/)'],
       globalSetup: '<rootDir>/test/server/support/global-setup.ts',
       setupFiles: ['<rootDir>/test/server/support/worker-database.ts'],
     },
