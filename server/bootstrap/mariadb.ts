@@ -1,5 +1,5 @@
 import { spawn, spawnSync } from 'node:child_process';
-import { existsSync, mkdirSync, readFileSync } from 'node:fs';
+import { existsSync, mkdirSync, readFileSync, statSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import mysql from 'mysql2/promise';
@@ -97,12 +97,19 @@ export async function ensureLocalMariadb(log: (line: string) => void): Promise<L
       '--innodb-buffer-pool-size=128M',
     ];
     if (isRoot()) args.push('--user=root');
+    const logSizeBefore = existsSync(errorLog) ? statSync(errorLog).size : 0;
     const child = spawn(findBinary('mariadbd')!, args, { detached: true, stdio: 'ignore' });
     child.unref();
     startedHere = true;
     log(`Starting MariaDB on 127.0.0.1:${localMariadbPort()}...`);
     const deadline = Date.now() + 30_000;
     while (!(await answers())) {
+      if (portTaken(logSizeBefore)) {
+        throw new Error(
+          `Port ${localMariadbPort()} on 127.0.0.1 is already in use by another program (perhaps another MariaDB). ` +
+            'Set MARIADB_PORT to a free port, or DATABASE_URL to use the server that is running there.',
+        );
+      }
       if (Date.now() > deadline) {
         const tail = existsSync(errorLog) ? readFileSync(errorLog, 'utf8').split('\n').slice(-15).join('\n') : '';
         throw new Error(`MariaDB did not start within 30 s. Its log says:\n${tail}`);
@@ -132,6 +139,11 @@ export async function ensureLocalMariadb(log: (line: string) => void): Promise<L
       }
     },
   };
+}
+
+/** Whether mariadbd wrote, since the given log size, that its port is taken. */
+function portTaken(logSizeBefore: number): boolean {
+  return existsSync(errorLog) && /Address already in use/.test(readFileSync(errorLog).subarray(logSizeBefore).toString('utf8'));
 }
 
 async function ensureAppUser(): Promise<void> {
