@@ -30,7 +30,8 @@ function walk(stack: Layer[], prefix: string, out: RegisteredRoute[]): void {
         });
       }
     } else if (layer.handle.stack) {
-      walk(layer.handle.stack, prefix + (layer.rawPath ?? ''), out);
+      // A router mounted without a path has rawPath "/": it adds nothing to the prefix.
+      walk(layer.handle.stack, prefix + (layer.rawPath === '/' ? '' : (layer.rawPath ?? '')), out);
     }
   }
 }
