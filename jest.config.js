@@ -7,6 +7,8 @@ module.exports = {
     {
       displayName: 'hub',
       testEnvironment: 'node',
+      // Real MariaDB work (migrations up and down, bcrypt sign-ins) takes seconds on a busy 2-core machine.
+      testTimeout: 30_000,
       roots: ['<rootDir>/test/server', '<rootDir>/test/domain'],
       testMatch: ['**/*.test.ts'],
       transform: {

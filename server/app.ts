@@ -11,8 +11,18 @@ import type { Db } from './db/tables';
 import { displaysRouter } from './displays/displays-router';
 import { apiNotFound, errorHandler } from './http/error-handler';
 import { originCheck } from './http/origin-check';
+import { pressCardsRouter } from './press/press-cards-router';
+import { pressesRouter } from './press/presses-router';
+import { recipesRouter } from './press/recipes-router';
 import { staticApp } from './http/static-app';
 import { stationsRouter } from './stations/stations-router';
+import { bagsRouter } from './bags/bags-router';
+import { customersRouter } from './customers/customers-router';
+import { designsRouter } from './designs/designs-router';
+import { jobsRouter } from './jobs/jobs-router';
+import { labelsRouter } from './labels/labels-router';
+import { materialsRouter } from './materials/materials-router';
+import { ordersRouter } from './orders/orders-router';
 
 /** What the hub needs from outside to build its app. */
 export interface AppDeps {
@@ -43,6 +53,7 @@ export function createApp({ db, env, sessionSecret, logger, browserDist }: AppDe
           'media-src': ["'self'", 'blob:'],
           'worker-src': ["'self'"],
           'connect-src': ["'self'"],
+          'font-src': ["'self'", 'data:'],
           // Tablets reach the hub over plain HTTP on the shop's network; do not force HTTPS sub-requests.
           'upgrade-insecure-requests': null,
         },
@@ -50,7 +61,17 @@ export function createApp({ db, env, sessionSecret, logger, browserDist }: AppDe
       strictTransportSecurity: env.TRUST_PROXY,
     }),
   );
-  app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => !req.url?.startsWith('/api') } }));
+  app.use(
+    pinoHttp({
+      logger,
+      autoLogging: { ignore: (req) => !req.url?.startsWith('/api') },
+      // One short line per API call: method, path, status, time. Cookies and bodies never reach the log.
+      serializers: {
+        req: (req: { method: string; url: string }) => ({ method: req.method, url: req.url }),
+        res: (res: { statusCode: number }) => ({ status: res.statusCode }),
+      },
+    }),
+  );
 
   const session = sessionMiddleware(db, env, sessionSecret);
   const api = express.Router();
@@ -65,6 +86,16 @@ export function createApp({ db, env, sessionSecret, logger, browserDist }: AppDe
   api.use('/auth', authRouter(db, env));
   api.use('/stations', stationsRouter(db));
   api.use('/displays', displaysRouter(db));
+  api.use('/customers', customersRouter(db));
+  api.use('/orders', ordersRouter(db));
+  api.use('/designs', designsRouter(env));
+  api.use(materialsRouter(db));
+  api.use(jobsRouter(db, env));
+  api.use(bagsRouter(db));
+  api.use(labelsRouter(db, env));
+  api.use('/press-cards', pressCardsRouter(db));
+  api.use('/presses', pressesRouter(db));
+  api.use('/recipes', recipesRouter(db));
   api.use(apiNotFound);
 
   app.use('/api', api);

@@ -1,4 +1,6 @@
+import path from 'node:path';
 import { z } from 'zod';
+import { varDir } from './paths';
 
 const booleanFlag = z
   .enum(['0', '1', 'true', 'false', 'yes', 'no'])
@@ -19,6 +21,8 @@ const envSchema = z.object({
     .transform((list) => list.split(',').map((origin) => origin.trim()).filter(Boolean)),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   LOGIN_ATTEMPTS_PER_15_MIN: z.coerce.number().int().positive().default(10),
+  UPLOADS_DIR: z.string().min(1).default(path.join(varDir, 'uploads')),
+  PUBLIC_URL: z.url({ protocol: /^https?$/ }).optional(),
 });
 
 /** The hub's configuration, read from the environment and checked once at boot. */

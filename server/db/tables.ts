@@ -95,6 +95,16 @@ export interface RecipeRow {
   updated_at: Date;
 }
 
+/** One change to a recipe: the whole row before (null when created) and after, as JSON. */
+export interface RecipeRevisionRow {
+  id: number;
+  recipe_id: number;
+  changed_by: number | null;
+  changed_at: Date;
+  before: unknown;
+  after: unknown;
+}
+
 export interface PressRow {
   id: number;
   name: string;
@@ -284,6 +294,7 @@ declare module 'knex/types/tables' {
     films: FilmRow;
     fabrics: FabricRow;
     recipes: RecipeRow;
+    recipe_revisions: RecipeRevisionRow;
     presses: PressRow;
     cutters: CutterRow;
     rolls: RollRow;

@@ -44,6 +44,12 @@ export const routes: Routes = [
         loadComponent: () => import('./stations/stations-page').then((m) => m.StationsPage),
       },
       {
+        path: 'orders',
+        canActivate: [roleGuard],
+        data: { roles: ['owner', 'lead'] satisfies Role[] },
+        loadChildren: () => import('./orders/orders-routes').then((m) => m.ORDERS_ROUTES),
+      },
+      {
         path: 'station-home',
         title: 'Station · Dwell',
         canActivate: [roleGuard],

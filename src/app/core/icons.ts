@@ -20,6 +20,19 @@ import qrCodeScanner from '@material-symbols/svg-400/rounded/qr_code_scanner.svg
 import tabletAndroid from '@material-symbols/svg-400/rounded/tablet_android.svg';
 import arrowBack from '@material-symbols/svg-400/rounded/arrow_back.svg';
 import close from '@material-symbols/svg-400/rounded/close.svg';
+import add from '@material-symbols/svg-400/rounded/add.svg';
+import arrowDownward from '@material-symbols/svg-400/rounded/arrow_downward.svg';
+import arrowUpward from '@material-symbols/svg-400/rounded/arrow_upward.svg';
+import callSplit from '@material-symbols/svg-400/rounded/call_split.svg';
+import cancel from '@material-symbols/svg-400/rounded/cancel.svg';
+import deleteIcon from '@material-symbols/svg-400/rounded/delete.svg';
+import download from '@material-symbols/svg-400/rounded/download.svg';
+import edit from '@material-symbols/svg-400/rounded/edit.svg';
+import print from '@material-symbols/svg-400/rounded/print.svg';
+import receiptLong from '@material-symbols/svg-400/rounded/receipt_long.svg';
+import search from '@material-symbols/svg-400/rounded/search.svg';
+import uploadFile from '@material-symbols/svg-400/rounded/upload_file.svg';
+import warning from '@material-symbols/svg-400/rounded/warning.svg';
 
 /** Every icon the app shows, by the name templates use in `svgIcon`. Only these are bundled. */
 const ICONS: Readonly<Record<string, string>> = {
@@ -42,6 +55,19 @@ const ICONS: Readonly<Record<string, string>> = {
   'station-weed': cleaningServices,
   'station-press': iron,
   'station-pack': package2,
+  add,
+  'arrow-down': arrowDownward,
+  'arrow-up': arrowUpward,
+  cancel,
+  delete: deleteIcon,
+  download,
+  edit,
+  orders: receiptLong,
+  print,
+  search,
+  split: callSplit,
+  'upload-file': uploadFile,
+  warning,
 };
 
 /** Registers Dwell's bundled SVG icons; nothing is fetched at run time. */

@@ -10,6 +10,7 @@ export interface NavEntry {
 
 /** Every screen the top bar can offer, and who may see it. */
 export const NAV_ENTRIES: readonly NavEntry[] = [
+  { path: '/orders', label: 'Orders', icon: 'orders', roles: ['owner', 'lead'] },
   { path: '/stations', label: 'Stations', icon: 'tablet', roles: ['owner', 'lead'] },
   { path: '/station-home', label: 'Station home', icon: 'qr-scan', roles: ['operator'] },
 ];

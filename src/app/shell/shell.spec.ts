@@ -42,16 +42,16 @@ describe('Shell', () => {
 
   afterEach(() => http.verify());
 
-  it('offers a lead the Stations screen and not the station home', async () => {
+  it('offers a lead the Orders and Stations screens and not the station home', async () => {
     await renderSignedInAs('lead');
 
-    expect(navLabels()).toEqual(['Stations']);
+    expect(navLabels()).toEqual(['Orders', 'Stations']);
   });
 
-  it('offers an owner the Stations screen', async () => {
+  it('offers an owner the Orders and Stations screens', async () => {
     await renderSignedInAs('owner');
 
-    expect(navLabels()).toEqual(['Stations']);
+    expect(navLabels()).toEqual(['Orders', 'Stations']);
   });
 
   it('offers an operator only the station home', async () => {
