@@ -10,6 +10,12 @@ async function typePin(page: Page, pin: string) {
 }
 
 test('the lead signs in, sees the navigation, pairs this tablet with Press 1 and signs out', async ({ page }) => {
+  // The hub's Content Security Policy must not block any of the app's own styles or scripts.
+  const blocked: string[] = [];
+  page.on('console', (message) => {
+    if (/Content Security Policy/i.test(message.text())) blocked.push(message.text());
+  });
+
   await test.step('open Dwell: anyone not signed in lands on the sign-in page', async () => {
     await page.goto('/');
     await expect(page).toHaveURL(/\/sign-in$/);
@@ -49,6 +55,8 @@ test('the lead signs in, sees the navigation, pairs this tablet with Press 1 and
     const me = await page.request.get('/api/auth/me');
     expect(me.status()).toBe(401);
   });
+
+  expect(blocked).toEqual([]);
 });
 
 test('an operator signs in on the paired Press 1 tablet with a PIN', async ({ page }) => {
