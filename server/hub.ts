@@ -1,4 +1,6 @@
-import { createServer } from 'node:http';
+import { readFileSync } from 'node:fs';
+import { createServer, type Server } from 'node:http';
+import { createServer as createTlsServer } from 'node:https';
 import type { AddressInfo } from 'node:net';
 import knex from 'knex';
 import { pino } from 'pino';
@@ -21,10 +23,11 @@ export interface RunningHub {
 
 /** Starts the hub: Express and socket.io on one HTTP server, connected to MariaDB. */
 export async function startHub(env: Env, databaseUrl: string): Promise<RunningHub> {
+  const tls = tlsFiles(env);
   const logger = pino({ level: env.LOG_LEVEL });
   const db = knex(knexConfig(databaseUrl));
   const { app, session } = createApp({ db, env, logger, sessionSecret: sessionSecret(env.SESSION_SECRET), browserDist });
-  const httpServer = createServer(app);
+  const httpServer: Server = tls ? createTlsServer(tls, app) : createServer(app);
   const io = attachSocketServer(httpServer, db, session);
 
   await new Promise<void>((resolve, reject) => {
@@ -35,7 +38,7 @@ export async function startHub(env: Env, databaseUrl: string): Promise<RunningHu
   const host = env.HOST === '0.0.0.0' || env.HOST === '::' ? '127.0.0.1' : env.HOST;
 
   return {
-    url: `http://${host}:${port}`,
+    url: `${tls ? 'https' : 'http'}://${host}:${port}`,
     port,
     db,
     io,
@@ -45,4 +48,13 @@ export async function startHub(env: Env, databaseUrl: string): Promise<RunningHu
       await db.destroy();
     },
   };
+}
+
+/** The certificate and key to serve HTTPS with (needed for the offline app on tablets), or null for plain HTTP. */
+function tlsFiles(env: Env): { cert: Buffer; key: Buffer } | null {
+  if (Boolean(env.TLS_CERT_FILE) !== Boolean(env.TLS_KEY_FILE)) {
+    throw new Error('Set both TLS_CERT_FILE and TLS_KEY_FILE to serve HTTPS, or neither for plain HTTP.');
+  }
+  if (!env.TLS_CERT_FILE || !env.TLS_KEY_FILE) return null;
+  return { cert: readFileSync(env.TLS_CERT_FILE), key: readFileSync(env.TLS_KEY_FILE) };
 }

@@ -23,6 +23,9 @@ const envSchema = z.object({
   LOGIN_ATTEMPTS_PER_15_MIN: z.coerce.number().int().positive().default(10),
   UPLOADS_DIR: z.string().min(1).default(path.join(varDir, 'uploads')),
   PUBLIC_URL: z.url({ protocol: /^https?$/ }).optional(),
+  // Tablets only run the offline app (a service worker) over HTTPS, or on the hub machine itself.
+  TLS_CERT_FILE: z.string().min(1).optional(),
+  TLS_KEY_FILE: z.string().min(1).optional(),
 });
 
 /** The hub's configuration, read from the environment and checked once at boot. */
