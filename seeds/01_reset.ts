@@ -4,6 +4,9 @@ import type { Knex } from 'knex';
 const TABLES_CHILD_FIRST = [
   'spoils',
   'photos',
+  'bag_layer_cuts',
+  'roll_movements',
+  'cutter_film_forces',
   'events',
   'mail_log',
   'roster_lines',

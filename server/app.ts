@@ -9,6 +9,7 @@ import { sessionMiddleware } from './auth/session-middleware';
 import type { Env } from './config/env';
 import type { Db } from './db/tables';
 import { displaysRouter } from './displays/displays-router';
+import { peopleRouter } from './people/people-router';
 import { apiNotFound, errorHandler } from './http/error-handler';
 import { originCheck } from './http/origin-check';
 import { pressCardsRouter } from './press/press-cards-router';
@@ -23,6 +24,14 @@ import { jobsRouter } from './jobs/jobs-router';
 import { labelsRouter } from './labels/labels-router';
 import { materialsRouter } from './materials/materials-router';
 import { ordersRouter } from './orders/orders-router';
+import { cutPlansRouter } from './cutting/cut-plans-router';
+import { cuttersRouter } from './cutters/cutters-router';
+import { rollsRouter } from './rolls/rolls-router';
+import { eventsRouter } from './events/events-router';
+import { FloorBroadcast } from './events/floor-broadcast';
+import { photosRouter } from './spoils/photos-router';
+import { spoilReasonsRouter } from './spoils/spoil-reasons-router';
+import { ticketsRouter } from './tickets/tickets-router';
 
 /** What the hub needs from outside to build its app. */
 export interface AppDeps {
@@ -37,8 +46,9 @@ export interface AppDeps {
 export const JSON_BODY_LIMIT = '256kb';
 
 /** Builds the hub's Express app (no listening): the API under /api and the built client. */
-export function createApp({ db, env, sessionSecret, logger, browserDist }: AppDeps): { app: express.Express; session: RequestHandler } {
+export function createApp({ db, env, sessionSecret, logger, browserDist }: AppDeps): { app: express.Express; session: RequestHandler; floor: FloorBroadcast } {
   const app = express();
+  const floor = new FloorBroadcast();
   app.set('trust proxy', env.TRUST_PROXY ? 1 : false);
   app.disable('x-powered-by');
 
@@ -86,6 +96,7 @@ export function createApp({ db, env, sessionSecret, logger, browserDist }: AppDe
   api.use('/auth', authRouter(db, env));
   api.use('/stations', stationsRouter(db));
   api.use('/displays', displaysRouter(db));
+  api.use('/people', peopleRouter(db));
   api.use('/customers', customersRouter(db));
   api.use('/orders', ordersRouter(db));
   api.use('/designs', designsRouter(env));
@@ -96,10 +107,17 @@ export function createApp({ db, env, sessionSecret, logger, browserDist }: AppDe
   api.use('/press-cards', pressCardsRouter(db));
   api.use('/presses', pressesRouter(db));
   api.use('/recipes', recipesRouter(db));
+  api.use('/events', eventsRouter(db, floor));
+  api.use('/tickets', ticketsRouter(db));
+  api.use('/spoil-reasons', spoilReasonsRouter(db));
+  api.use('/spoils', photosRouter(db, env));
+  api.use(cutPlansRouter(db, env, floor));
+  api.use(cuttersRouter(db, floor));
+  api.use('/rolls', rollsRouter(db));
   api.use(apiNotFound);
 
   app.use('/api', api);
   app.use(staticApp(browserDist));
   app.use(errorHandler);
-  return { app, session };
+  return { app, session, floor };
 }

@@ -26,9 +26,9 @@ export async function startHub(env: Env, databaseUrl: string): Promise<RunningHu
   const tls = tlsFiles(env);
   const logger = pino({ level: env.LOG_LEVEL });
   const db = knex(knexConfig(databaseUrl));
-  const { app, session } = createApp({ db, env, logger, sessionSecret: sessionSecret(env.SESSION_SECRET), browserDist });
+  const { app, session, floor } = createApp({ db, env, logger, sessionSecret: sessionSecret(env.SESSION_SECRET), browserDist });
   const httpServer: Server = tls ? createTlsServer(tls, app) : createServer(app);
-  const io = attachSocketServer(httpServer, db, session);
+  const io = attachSocketServer(httpServer, db, session, floor);
 
   await new Promise<void>((resolve, reject) => {
     httpServer.once('error', reject);

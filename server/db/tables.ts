@@ -238,6 +238,7 @@ export interface EventRow {
   client_at: Date;
   server_at: Date;
   payload: Record<string, unknown>;
+  over_count_reason: string | null;
 }
 
 export interface SpoilReasonRow {
@@ -284,6 +285,39 @@ export interface MailLogRow {
   sent_at: Date | null;
 }
 
+/** One change to a roll's remaining length: received, cut (layout plus test cut) or measured. */
+export interface RollMovementRow {
+  id: number;
+  roll_id: number;
+  kind: 'received' | 'cut' | 'measure';
+  change_mm: number;
+  remaining_mm: number;
+  cut_length_mm: number | null;
+  test_cut_mm: number | null;
+  cutter_id: number | null;
+  user_id: number | null;
+  bag_ids: number[] | null;
+  note: string;
+  created_at: Date;
+}
+
+/** One layer film of a bag that has been cut. */
+export interface BagLayerCutRow {
+  id: number;
+  bag_id: number;
+  film_id: number;
+  roll_movement_id: number;
+  cut_at: Date;
+}
+
+/** The force that last cut and weeded clean on one cutter for one film type. */
+export interface CutterFilmForceRow {
+  cutter_id: number;
+  film_type_id: number;
+  force_g: number;
+  tested_at: Date;
+}
+
 declare module 'knex/types/tables' {
   interface Tables {
     shop_settings: ShopSettingsRow;
@@ -309,6 +343,9 @@ declare module 'knex/types/tables' {
     spoils: SpoilRow;
     photos: PhotoRow;
     mail_log: MailLogRow;
+    roll_movements: RollMovementRow;
+    bag_layer_cuts: BagLayerCutRow;
+    cutter_film_forces: CutterFilmForceRow;
   }
 }
 

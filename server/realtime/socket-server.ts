@@ -4,6 +4,8 @@ import { Server, type Socket } from 'socket.io';
 import { rooms, type ClientToServerEvents, type ServerToClientEvents } from '../../src/shared/socket-contract';
 import { resolvePrincipal, type Principal } from '../auth/principal';
 import type { Db } from '../db/tables';
+import { handleEventPushes } from '../events/events-socket';
+import { FloorBroadcast } from '../events/floor-broadcast';
 import { PresenceRepository } from './presence-repository';
 
 interface SocketData {
@@ -16,8 +18,9 @@ export type Hub = Server<ClientToServerEvents, ServerToClientEvents, Record<stri
 type IncomingRequest = Parameters<RequestHandler>[0];
 
 /** Attaches socket.io to the HTTP server: same session cookie, rooms by role and by station. */
-export function attachSocketServer(httpServer: HttpServer, db: Db, session: RequestHandler): Hub {
+export function attachSocketServer(httpServer: HttpServer, db: Db, session: RequestHandler, floor = new FloorBroadcast()): Hub {
   const io: Hub = new Server(httpServer, { serveClient: false, cors: { origin: false } });
+  floor.attach(io);
   const presence = new PresenceRepository(db);
 
   // The same express-session middleware reads the cookie on the handshake.
@@ -33,6 +36,7 @@ export function attachSocketServer(httpServer: HttpServer, db: Db, session: Requ
 
   io.on('connection', async (socket: Socket<ClientToServerEvents, ServerToClientEvents, Record<string, never>, SocketData>) => {
     const { principal } = socket.data;
+    handleEventPushes(socket, db, floor);
     await socket.join(rooms.role(principal.role));
     if (principal.station) await socket.join(rooms.station(principal.station.id));
 

@@ -78,3 +78,13 @@ export interface BoardUpdate {
   bagIds: number[];
   at: string;
 }
+
+/** POST /api/spoils/:eventId/photo (multipart field "photo"): the photo stored for a spoil event, once. */
+export interface SpoilPhoto {
+  eventId: string;
+  mime: 'image/jpeg' | 'image/png' | 'image/webp';
+  bytes: number;
+  url: string;
+  thumbUrl: string;
+  createdAt: string;
+}

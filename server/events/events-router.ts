@@ -1,0 +1,21 @@
+import { Router } from 'express';
+import type { StationEvent } from '../../src/shared/events-contract';
+import { allowRoles } from '../auth/guards';
+import type { Db } from '../db/tables';
+import { validate } from '../http/validate';
+import { eventBatchSchema } from './event-schemas';
+import { EventsService } from './events-service';
+import type { FloorBroadcast } from './floor-broadcast';
+
+/** POST /api/events: a station's outbox batch over HTTP, the same as events:push over the socket. */
+export function eventsRouter(db: Db, floor: FloorBroadcast): Router {
+  const router = Router();
+  const events = new EventsService(db, floor);
+
+  router.post('/', allowRoles('operator'), async (req, res) => {
+    const batch = validate(eventBatchSchema, req.body ?? {}, 'event batch');
+    res.json(await events.ingest(req.principal!, batch.events as StationEvent[]));
+  });
+
+  return router;
+}
