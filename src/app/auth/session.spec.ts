@@ -52,4 +52,42 @@ describe('Session', () => {
     await expect(signedOut).rejects.toBeTruthy();
     expect(session.signedIn()).toBe(false);
   });
+
+  describe('offline at a station', () => {
+    async function signInOperatorThenRestart(): Promise<Session> {
+      const signedIn = session.signInWithPin('a-device-token-of-this-tablet', 7, '2468');
+      http.expectOne('/api/auth/pin').flush({
+        user: { id: 7, name: 'Tam Okafor', email: null, role: 'operator' },
+        station: { id: 4, name: 'Weed 1', kind: 'weed' },
+      });
+      await signedIn;
+      // A reload: a fresh Session over the same storage.
+      return TestBed.runInInjectionContext(() => new Session());
+    }
+
+    it.each([
+      ['no network at all', 0],
+      ['the service worker answering 504 for the hub', 504],
+    ])('keeps the remembered operator signed in when the hub cannot be reached (%s)', async (_case, status) => {
+      const restarted = await signInOperatorThenRestart();
+      const loaded = restarted.load();
+      const call = http.expectOne('/api/auth/me');
+      if (status === 0) call.error(new ProgressEvent('error'));
+      else call.flush('', { status, statusText: 'Gateway Timeout' });
+      await loaded;
+
+      expect(restarted.role()).toBe('operator');
+      expect(restarted.station()?.name).toBe('Weed 1');
+      expect(restarted.unconfirmed()).toBe(true);
+    });
+
+    it('signs the remembered operator out when the hub answers 401', async () => {
+      const restarted = await signInOperatorThenRestart();
+      const loaded = restarted.load();
+      http.expectOne('/api/auth/me').flush({ error: 'Sign in first.' }, { status: 401, statusText: 'Unauthorized' });
+      await loaded;
+
+      expect(restarted.signedIn()).toBe(false);
+    });
+  });
 });

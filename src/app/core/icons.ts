@@ -33,9 +33,43 @@ import receiptLong from '@material-symbols/svg-400/rounded/receipt_long.svg';
 import search from '@material-symbols/svg-400/rounded/search.svg';
 import uploadFile from '@material-symbols/svg-400/rounded/upload_file.svg';
 import warning from '@material-symbols/svg-400/rounded/warning.svg';
+import checkBox from '@material-symbols/svg-400/rounded/check_box.svg';
+import checkBoxOutlineBlank from '@material-symbols/svg-400/rounded/check_box_outline_blank.svg';
+import gridView from '@material-symbols/svg-400/rounded/grid_view.svg';
+import inventory2 from '@material-symbols/svg-400/rounded/inventory_2.svg';
+import photoCamera from '@material-symbols/svg-400/rounded/photo_camera.svg';
+import flashlightOn from '@material-symbols/svg-400/rounded/flashlight_on.svg';
+import videocam from '@material-symbols/svg-400/rounded/videocam.svg';
+import undo from '@material-symbols/svg-400/rounded/undo.svg';
+import doneAll from '@material-symbols/svg-400/rounded/done_all.svg';
+import report from '@material-symbols/svg-400/rounded/report.svg';
+import remove from '@material-symbols/svg-400/rounded/remove.svg';
+import acUnit from '@material-symbols/svg-400/rounded/ac_unit.svg';
+import air from '@material-symbols/svg-400/rounded/air.svg';
+import backHand from '@material-symbols/svg-400/rounded/back_hand.svg';
+import compress from '@material-symbols/svg-400/rounded/compress.svg';
+import deviceThermostat from '@material-symbols/svg-400/rounded/device_thermostat.svg';
+import healthAndSafety from '@material-symbols/svg-400/rounded/health_and_safety.svg';
+import history from '@material-symbols/svg-400/rounded/history.svg';
+import layers from '@material-symbols/svg-400/rounded/layers.svg';
+import localFireDepartment from '@material-symbols/svg-400/rounded/local_fire_department.svg';
+import menuBook from '@material-symbols/svg-400/rounded/menu_book.svg';
+import modeHeat from '@material-symbols/svg-400/rounded/mode_heat.svg';
+import playArrow from '@material-symbols/svg-400/rounded/play_arrow.svg';
+import sunny from '@material-symbols/svg-400/rounded/sunny.svg';
+import timer from '@material-symbols/svg-400/rounded/timer.svg';
+import volumeOff from '@material-symbols/svg-400/rounded/volume_off.svg';
+import volumeUp from '@material-symbols/svg-400/rounded/volume_up.svg';
+import personAdd from '@material-symbols/svg-400/rounded/person_add.svg';
+import key from '@material-symbols/svg-400/rounded/key.svg';
+import group from '@material-symbols/svg-400/rounded/group.svg';
 
 /** Every icon the app shows, by the name templates use in `svgIcon`. Only these are bundled. */
 const ICONS: Readonly<Record<string, string>> = {
+  'check-box': checkBox,
+  'check-box-blank': checkBoxOutlineBlank,
+  'gang-planner': gridView,
+  'roll-rack': inventory2,
   'arrow-back': arrowBack,
   backspace,
   badge,
@@ -68,6 +102,33 @@ const ICONS: Readonly<Record<string, string>> = {
   split: callSplit,
   'upload-file': uploadFile,
   warning,
+  'caution-fumes': air,
+  'caution-hot': localFireDepartment,
+  'caution-pinch': backHand,
+  'caution-rules': healthAndSafety,
+  history,
+  layers,
+  'peel-cold': acUnit,
+  'peel-hot': localFireDepartment,
+  'peel-warm': sunny,
+  play: playArrow,
+  pressure: compress,
+  'recipe-book': menuBook,
+  'person-add': personAdd,
+  key,
+  people: group,
+  temperature: deviceThermostat,
+  timer,
+  'total-heat': modeHeat,
+  'volume-off': volumeOff,
+  'volume-on': volumeUp,
+  camera: photoCamera,
+  torch: flashlightOn,
+  videocam,
+  undo,
+  'done-all': doneAll,
+  spoil: report,
+  remove,
 };
 
 /** Registers Dwell's bundled SVG icons; nothing is fetched at run time. */

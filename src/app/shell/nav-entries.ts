@@ -1,4 +1,5 @@
-import { Role } from '../auth/session';
+import { Role, StationKind } from '../auth/session';
+import { STATION_KINDS } from '../../shared/names';
 
 /** One place in the app a person can go from the top bar. */
 export interface NavEntry {
@@ -6,6 +7,8 @@ export interface NavEntry {
   label: string;
   icon: string;
   roles: readonly Role[];
+  /** Shown only at these kinds of station (for an operator's station screens); everywhere when absent. */
+  stationKinds?: readonly StationKind[];
 }
 
 /** Every screen the top bar can offer, and who may see it. */
@@ -13,9 +16,21 @@ export const NAV_ENTRIES: readonly NavEntry[] = [
   { path: '/orders', label: 'Orders', icon: 'orders', roles: ['owner', 'lead'] },
   { path: '/stations', label: 'Stations', icon: 'tablet', roles: ['owner', 'lead'] },
   { path: '/station-home', label: 'Station home', icon: 'qr-scan', roles: ['operator'] },
+  { path: '/gang-planner', label: 'Gang planner', icon: 'gang-planner', roles: ['owner', 'lead'] },
+  { path: '/roll-rack', label: 'Roll rack', icon: 'roll-rack', roles: ['owner', 'lead'] },
+  { path: '/cut-station', label: 'Cut station', icon: 'station-cut', roles: ['operator'], stationKinds: ['cut'] },
+  { path: '/gang-planner', label: 'Gang planner', icon: 'gang-planner', roles: ['operator'], stationKinds: ['cut'] },
+  { path: '/roll-rack', label: 'Roll rack', icon: 'roll-rack', roles: ['operator'], stationKinds: ['cut'] },
+  { path: '/weed', label: 'Weed tally', icon: 'station-weed', roles: ['operator'], stationKinds: ['weed'] },
+  { path: '/spoil', label: 'Spoil report', icon: 'spoil', roles: ['operator'], stationKinds: STATION_KINDS },
+  { path: '/press', label: 'Press card', icon: 'station-press', roles: ['operator'], stationKinds: ['press'] },
+  { path: '/recipes', label: 'Recipe book', icon: 'recipe-book', roles: ['owner', 'lead'] },
+  { path: '/people', label: 'People', icon: 'people', roles: ['owner', 'lead'] },
 ];
 
-/** The entries a person with `role` may use. */
-export function navEntriesFor(role: Role | null): NavEntry[] {
-  return role === null ? [] : NAV_ENTRIES.filter((entry) => entry.roles.includes(role));
+/** The entries a person with `role` may use, at a station of `stationKind` (null away from a station). */
+export function navEntriesFor(role: Role | null, stationKind: StationKind | null = null): NavEntry[] {
+  return role === null
+    ? []
+    : NAV_ENTRIES.filter((entry) => entry.roles.includes(role) && (!entry.stationKinds || (stationKind !== null && entry.stationKinds.includes(stationKind))));
 }

@@ -6,6 +6,7 @@ import { Router, provideRouter } from '@angular/router';
 import { MatIconTestingModule } from '@angular/material/icon/testing';
 import { Role, Session } from '../auth/session';
 import { Shell } from './shell';
+import { navEntriesFor } from './nav-entries';
 
 describe('Shell', () => {
   let fixture: ComponentFixture<Shell>;
@@ -42,16 +43,28 @@ describe('Shell', () => {
 
   afterEach(() => http.verify());
 
-  it('offers a lead the Orders and Stations screens and not the station home', async () => {
+  it('offers a lead the office screens and not the station home', async () => {
     await renderSignedInAs('lead');
 
-    expect(navLabels()).toEqual(['Orders', 'Stations']);
+    expect(navLabels()).toEqual(['Orders', 'Stations', 'Gang planner', 'Roll rack', 'Recipe book', 'People']);
   });
 
-  it('offers an owner the Orders and Stations screens', async () => {
+  it('offers an owner the office screens, People included', async () => {
     await renderSignedInAs('owner');
 
-    expect(navLabels()).toEqual(['Orders', 'Stations']);
+    expect(navLabels()).toEqual(['Orders', 'Stations', 'Gang planner', 'Roll rack', 'Recipe book', 'People']);
+  });
+
+  it('offers the Cut station, Gang planner and Roll rack to an operator only at a cut station', () => {
+    expect(navEntriesFor('operator', 'cut').map((entry) => entry.label)).toEqual(expect.arrayContaining(['Cut station', 'Gang planner', 'Roll rack']));
+    expect(navEntriesFor('operator', 'weed').map((entry) => entry.label)).not.toEqual(expect.arrayContaining(['Cut station']));
+    expect(navEntriesFor('operator', 'weed').map((entry) => entry.label)).not.toContain('Roll rack');
+  });
+
+  it('offers the Press card only to an operator at a press station', () => {
+    expect(navEntriesFor('operator', 'press').map((entry) => entry.label)).toContain('Press card');
+    expect(navEntriesFor('operator', 'weed').map((entry) => entry.label)).not.toContain('Press card');
+    expect(navEntriesFor('lead', 'press').map((entry) => entry.label)).not.toContain('Press card');
   });
 
   it('offers an operator only the station home', async () => {
