@@ -51,7 +51,8 @@ async function main(): Promise<number> {
   try {
     if ((await typecheck) !== 0) failures.push('type-check');
     if (only !== 'e2e') {
-      if ((await run('jest', ['--ci'], testEnv)) !== 0) failures.push('jest');
+      // --forceExit: a failed test can leave a request or pool behind, and CI must then end, not hang.
+      if ((await run('jest', ['--ci', '--forceExit'], testEnv)) !== 0) failures.push('jest');
     }
     if (only !== 'unit' && hasJourneys()) {
       if (clientIsStale()) buildClient(log);

@@ -60,6 +60,7 @@ import sunny from '@material-symbols/svg-400/rounded/sunny.svg';
 import timer from '@material-symbols/svg-400/rounded/timer.svg';
 import volumeOff from '@material-symbols/svg-400/rounded/volume_off.svg';
 import volumeUp from '@material-symbols/svg-400/rounded/volume_up.svg';
+import sync from '@material-symbols/svg-400/rounded/sync.svg';
 import personAdd from '@material-symbols/svg-400/rounded/person_add.svg';
 import key from '@material-symbols/svg-400/rounded/key.svg';
 import group from '@material-symbols/svg-400/rounded/group.svg';
@@ -117,6 +118,7 @@ const ICONS: Readonly<Record<string, string>> = {
   'person-add': personAdd,
   key,
   people: group,
+  sync,
   temperature: deviceThermostat,
   timer,
   'total-heat': modeHeat,

@@ -15,7 +15,8 @@ export interface NavEntry {
 export const NAV_ENTRIES: readonly NavEntry[] = [
   { path: '/orders', label: 'Orders', icon: 'orders', roles: ['owner', 'lead'] },
   { path: '/stations', label: 'Stations', icon: 'tablet', roles: ['owner', 'lead'] },
-  { path: '/station-home', label: 'Station home', icon: 'qr-scan', roles: ['operator'] },
+  // Stations with a screen of their own reach the station home through the wordmark; the pack station has none yet.
+  { path: '/station-home', label: 'Station home', icon: 'qr-scan', roles: ['operator'], stationKinds: ['pack'] },
   { path: '/gang-planner', label: 'Gang planner', icon: 'gang-planner', roles: ['owner', 'lead'] },
   { path: '/roll-rack', label: 'Roll rack', icon: 'roll-rack', roles: ['owner', 'lead'] },
   { path: '/cut-station', label: 'Cut station', icon: 'station-cut', roles: ['operator'], stationKinds: ['cut'] },

@@ -67,10 +67,15 @@ describe('Shell', () => {
     expect(navEntriesFor('lead', 'press').map((entry) => entry.label)).not.toContain('Press card');
   });
 
-  it('offers an operator only the station home', async () => {
+  it('offers an operator away from any station no screens', async () => {
     await renderSignedInAs('operator');
 
-    expect(navLabels()).toEqual(['Station home']);
+    expect(navLabels()).toEqual([]);
+  });
+
+  it('offers a press operator just the press card and the spoil report, so the bar stays one row', () => {
+    expect(navEntriesFor('operator', 'press').map((entry) => entry.label)).toEqual(['Spoil report', 'Press card']);
+    expect(navEntriesFor('operator', 'pack').map((entry) => entry.label)).toEqual(['Station home', 'Spoil report']);
   });
 
   it('shows who is signed in and their role', async () => {
