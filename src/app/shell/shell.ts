@@ -4,6 +4,7 @@ import { Router, RouterLink, RouterLinkActive, RouterOutlet } from '@angular/rou
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { Session } from '../auth/session';
+import { AppUpdates } from '../core/app-updates';
 import { DevicePairing } from '../auth/device-pairing';
 import { SyncTray } from '../sync/sync-tray';
 import { navEntriesFor } from './nav-entries';
@@ -27,6 +28,8 @@ export class Shell {
   protected readonly entries = computed(() => navEntriesFor(this.session.role(), this.session.station()?.kind ?? null));
   /** The sync tray shows on station tablets: for the operator, and for a lead who signs in there. */
   protected readonly stationTablet = computed(() => this.session.role() === 'operator' || (this.session.role() !== null && this.pairing.paired()));
+  private readonly updates = inject(AppUpdates);
+  protected readonly updateReady = this.updates.updateReady;
   // A station tablet has at most three screens, which fit beside the name; office roles have more.
   protected readonly oneRow = computed(() => this.entries().length <= 3);
   protected readonly roleLabel = computed(() => {
@@ -34,6 +37,10 @@ export class Shell {
     return role ? ROLE_LABELS[role] : '';
   });
   protected readonly signingOut = signal(false);
+
+  protected useNewVersion(): void {
+    this.updates.useNewVersion();
+  }
 
   protected async signOut(): Promise<void> {
     const operatorAtStation = this.session.role() === 'operator';
