@@ -1,18 +1,11 @@
 import { expect, test, type Page } from '@playwright/test';
 import { DEMO_ACCOUNTS } from '../../seeds/data/demo-accounts';
+import { pairThisTabletAndHandOver, signInWithEmail, signInWithPin } from './support/floor-steps';
 import { screenshotAt } from './support/screenshots';
 
 // Manual: how the lead gangs bags of the same film on the Gang planner and confirms the cut, and how
 // the cut operator records a test cut at the Cut station and confirms a cut there. Each step is what
 // a person does and what they should see.
-
-async function signInAsLead(page: Page) {
-  await page.goto('/sign-in');
-  await page.getByLabel('E-mail').fill(DEMO_ACCOUNTS.lead.email);
-  await page.getByLabel('Password').fill(DEMO_ACCOUNTS.lead.password);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await expect(page.getByTestId('signed-in-person')).toContainText(DEMO_ACCOUNTS.lead.name);
-}
 
 /** The film length the preview shows, in mm (the small line under the big length). */
 async function shownLengthMm(page: Page): Promise<number> {
@@ -27,7 +20,7 @@ async function rollRemaining(page: Page, label: string): Promise<number> {
 
 test('the lead gangs two bags and confirms; the cut operator test-cuts and confirms at the Cut station', async ({ page }) => {
   await test.step('the lead opens the Gang planner and picks the white film', async () => {
-    await signInAsLead(page);
+    await signInWithEmail(page, 'lead');
     await page.getByRole('navigation', { name: 'Screens' }).getByRole('link', { name: 'Gang planner' }).click();
     await expect(page.getByRole('heading', { name: 'Gang planner', level: 1 })).toBeVisible();
     await page.locator('.group-tile', { hasText: 'White' }).filter({ hasText: 'Standard PU' }).first().click();
@@ -62,15 +55,8 @@ test('the lead gangs two bags and confirms; the cut operator test-cuts and confi
   });
 
   await test.step('the lead pairs this tablet with Cut 1 and hands it to the cut operator', async () => {
-    await page.getByRole('navigation', { name: 'Screens' }).getByRole('link', { name: 'Stations' }).click();
-    const cut1 = page.getByTestId('station-card').filter({ has: page.getByRole('heading', { name: 'Cut 1', exact: true }) });
-    await cut1.getByRole('button', { name: 'Pair this tablet' }).click();
-    await page.getByRole('button', { name: 'Sign out and open the PIN pad' }).click();
-    const operator = DEMO_ACCOUNTS.operators[0];
-    await page.getByRole('button', { name: operator.name }).click();
-    for (const digit of operator.pin) await page.getByRole('button', { name: digit, exact: true }).click();
-    await page.getByTestId('pin-enter').click();
-    await expect(page.getByTestId('signed-in-person')).toContainText(operator.name);
+    await pairThisTabletAndHandOver(page, 'Cut 1');
+    await signInWithPin(page, DEMO_ACCOUNTS.operators[0]);
   });
 
   await test.step('at Cut 1, the operator opens the remaining white bags at the Cut station', async () => {

@@ -1,8 +1,8 @@
-import { expect, request as playwrightRequest, test, type APIRequestContext, type Page } from '@playwright/test';
+import { expect, test, type APIRequestContext } from '@playwright/test';
 import path from 'node:path';
 import { DEMO_ACCOUNTS } from '../../seeds/data/demo-accounts';
 import type { OrderDetail, OrderPage } from '../../src/shared/intake-contract';
-import { e2eBaseUrl } from './support/e2e-hub';
+import { leadApi, operatorAtStation } from './support/floor-steps';
 import { screenshotAt } from './support/screenshots';
 
 // Manual: a weed station keeps working when the Wi-Fi drops. The lead pairs the tablet with Weed 1,
@@ -13,17 +13,6 @@ import { screenshotAt } from './support/screenshots';
 const PHOTO = path.resolve(__dirname, 'fixtures', 'spoil-photo.jpg');
 const BAG = '1043-C';
 
-async function signedInLead(): Promise<APIRequestContext> {
-  const lead = await playwrightRequest.newContext({ baseURL: e2eBaseUrl(), extraHTTPHeaders: { Origin: e2eBaseUrl() } });
-  const login = await lead.post('/api/auth/login', { data: { email: DEMO_ACCOUNTS.lead.email, password: DEMO_ACCOUNTS.lead.password } });
-  expect(login.ok()).toBe(true);
-  return lead;
-}
-
-async function typePin(page: Page, pin: string) {
-  for (const digit of pin) await page.getByRole('button', { name: digit, exact: true }).click();
-}
-
 async function bagAtHub(lead: APIRequestContext) {
   const orders = (await (await lead.get('/api/orders')).json()) as OrderPage;
   const order = (await (await lead.get(`/api/orders/${orders.items.find((o) => o.code === '1043')!.id}`)).json()) as OrderDetail;
@@ -32,22 +21,13 @@ async function bagAtHub(lead: APIRequestContext) {
 
 test('a weed station keeps working offline and the hub gets exactly its work when the network returns', async ({ page, context }) => {
   test.setTimeout(150_000);
-  const lead = await signedInLead();
+  const lead = await leadApi();
   const operator = DEMO_ACCOUNTS.operators[1];
   const before = await bagAtHub(lead);
   expect(before.counts.weeded).toBeLessThan(before.pieces);
 
   await test.step('the lead pairs this tablet with Weed 1; an operator signs in with a PIN', async () => {
-    await page.goto('/sign-in');
-    await page.getByLabel('E-mail').fill(DEMO_ACCOUNTS.lead.email);
-    await page.getByLabel('Password').fill(DEMO_ACCOUNTS.lead.password);
-    await page.getByRole('button', { name: 'Sign in' }).click();
-    const weed1 = page.getByTestId('station-card').filter({ has: page.getByRole('heading', { name: 'Weed 1', exact: true }) });
-    await weed1.getByRole('button', { name: 'Pair this tablet' }).click();
-    await page.getByRole('button', { name: 'Sign out and open the PIN pad' }).click();
-    await page.getByRole('button', { name: operator.name }).click();
-    await typePin(page, operator.pin);
-    await page.getByTestId('pin-enter').click();
+    await operatorAtStation(page, 'Weed 1', operator);
     await expect(page.getByTestId('station-name')).toHaveText('Weed 1');
   });
 

@@ -1,8 +1,9 @@
-import { expect, request as playwrightRequest, test, type APIRequestContext, type Page } from '@playwright/test';
+import { expect, test } from '@playwright/test';
 import { DEMO_ACCOUNTS } from '../../seeds/data/demo-accounts';
 import type { OrderDetail, OrderPage } from '../../src/shared/intake-contract';
 import type { RecipeListItem } from '../../src/shared/press/press-contract';
 import { e2eBaseUrl } from './support/e2e-hub';
+import { leadApi, operatorAtStation } from './support/floor-steps';
 import { screenshotAt } from './support/screenshots';
 
 // Manual: the Press station. An operator on the air press (Press 2) scans a bag's label, reads the
@@ -17,17 +18,6 @@ import { screenshotAt } from './support/screenshots';
 const FILM = 'Standard PU 90 µm';
 const FABRIC = '50/50 cotton-poly';
 
-async function signedInLead(): Promise<APIRequestContext> {
-  const lead = await playwrightRequest.newContext({ baseURL: e2eBaseUrl(), extraHTTPHeaders: { Origin: e2eBaseUrl() } });
-  const login = await lead.post('/api/auth/login', { data: { email: DEMO_ACCOUNTS.lead.email, password: DEMO_ACCOUNTS.lead.password } });
-  expect(login.ok()).toBe(true);
-  return lead;
-}
-
-async function typePin(page: Page, pin: string) {
-  for (const digit of pin) await page.getByRole('button', { name: digit, exact: true }).click();
-}
-
 function recipeValues(recipe: RecipeListItem) {
   const { tempC, dwellS, pressureClass, peel, prePressS, tackS, secondPressS, notes, source } = recipe;
   return { tempC, dwellS, pressureClass, peel, prePressS, tackS, secondPressS, notes, source };
@@ -35,7 +25,7 @@ function recipeValues(recipe: RecipeListItem) {
 
 test('an operator on the air press scans the two-layer hoodies, reads the card, presses one piece and the hub counts it', async ({ page }) => {
   test.setTimeout(120_000);
-  const lead = await signedInLead();
+  const lead = await leadApi();
   const operator = DEMO_ACCOUNTS.operators[0];
 
   const recipes = (await (await lead.get('/api/recipes')).json()) as RecipeListItem[];
@@ -54,16 +44,7 @@ test('an operator on the air press scans the two-layer hoodies, reads the card, 
     });
 
     await test.step('a lead pairs this tablet with Press 2 (the air press) and an operator signs in with a PIN', async () => {
-      await page.goto('/sign-in');
-      await page.getByLabel('E-mail').fill(DEMO_ACCOUNTS.lead.email);
-      await page.getByLabel('Password').fill(DEMO_ACCOUNTS.lead.password);
-      await page.getByRole('button', { name: 'Sign in' }).click();
-      const press2 = page.getByTestId('station-card').filter({ has: page.getByRole('heading', { name: 'Press 2', exact: true }) });
-      await press2.getByRole('button', { name: 'Pair this tablet' }).click();
-      await page.getByRole('button', { name: 'Sign out and open the PIN pad' }).click();
-      await page.getByRole('button', { name: operator.name }).click();
-      await typePin(page, operator.pin);
-      await page.getByTestId('pin-enter').click();
+      await operatorAtStation(page, 'Press 2', operator);
       await expect(page.getByTestId('station-name')).toHaveText('Press 2');
     });
 

@@ -1,13 +1,10 @@
-import { expect, test, type Page } from '@playwright/test';
+import { expect, test } from '@playwright/test';
 import { DEMO_ACCOUNTS } from '../../seeds/data/demo-accounts';
+import { typePin } from './support/floor-steps';
 import { screenshotAt } from './support/screenshots';
 
 // Manual: how the lead signs in, pairs a tablet with a station, and how an operator then signs in
 // on that tablet with a PIN. Each step is what a person does and what they should see.
-
-async function typePin(page: Page, pin: string) {
-  for (const digit of pin) await page.getByRole('button', { name: digit, exact: true }).click();
-}
 
 test('the lead signs in, sees the navigation, pairs this tablet with Press 1 and signs out', async ({ page }) => {
   // The hub's Content Security Policy must not block any of the app's own styles or scripts.
