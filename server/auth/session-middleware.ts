@@ -12,6 +12,10 @@ export function sessionMiddleware(db: Db, env: Env, secret: string) {
     // Expired rows are swept by the running hub; tests pass 0 so no timer outlives them.
     cleanupInterval: env.NODE_ENV === 'test' ? 0 : 15 * 60 * 1000,
   });
+  // The store checks its table once at start. If the database is unreachable then (or the hub is
+  // closed before the check ends) that promise rejects with nobody listening, which would end the
+  // process; requests that need a session still wait for it and fail with a 500 of their own.
+  store.ready.catch(() => undefined);
   return session({
     name: 'dwell.sid',
     secret,

@@ -59,7 +59,6 @@ describe('bad input gets a 4xx with a sentence, never a crash', () => {
 /** The app after its database pool was shut: every query fails, as if MariaDB had gone away. */
 async function testAppWithBrokenDatabase() {
   const app = testApp();
-  await signedInPerson(app.app, 'lead'); // lets the session store finish its start-up first
   await app.db.destroy();
   return { app: app.app, close: async () => {} };
 }
