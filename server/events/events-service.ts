@@ -2,7 +2,7 @@ import type { BatchReply, StationEvent } from '../../src/shared/events-contract'
 import type { EventKind, StationKind } from '../../src/shared/names';
 import type { Principal } from '../auth/principal';
 import type { Db } from '../db/tables';
-import { applyEvent, DONE_STAGE, KINDS_FOR_STATION, overCountProblems, stageOf, type BagCounts } from './bag-progress';
+import { applyEvent, DONE_STAGE, KINDS_FOR_STATION, overCountProblems, stageOf, type BagCounts } from '../../src/shared/events/bag-progress';
 import { payloadSchemas, stationEventSchema } from './event-schemas';
 import { EventsRepository, type LockedBag } from './events-repository';
 import type { FloorBroadcast } from './floor-broadcast';

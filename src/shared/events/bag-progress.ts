@@ -1,4 +1,4 @@
-import type { BagStage, EventKind, StationKind } from '../../src/shared/names';
+import type { BagStage, EventKind, StationKind } from '../names';
 
 /** A bag's running counts. Done counts are good pieces leaving a stage; spoils are pieces lost at one. */
 export interface BagCounts {
@@ -11,7 +11,8 @@ export interface BagCounts {
   spoiledAt: Record<StationKind, number>;
 }
 
-const ROUTE: readonly StationKind[] = ['cut', 'weed', 'press', 'pack'];
+/** The stages of work in the order a bag meets them. */
+export const ROUTE: readonly StationKind[] = ['cut', 'weed', 'press', 'pack'];
 const STAGE_AFTER: Record<StationKind, BagStage> = { cut: 'cut', weed: 'weeded', press: 'pressed', pack: 'packed' };
 const COUNT_OF: Record<StationKind, 'cut' | 'weeded' | 'pressed' | 'packed'> = { cut: 'cut', weed: 'weeded', press: 'pressed', pack: 'packed' };
 const STAGE_WORD: Record<StationKind, string> = { cut: 'cut', weed: 'weeded', press: 'pressed', pack: 'packed' };

@@ -1,0 +1,66 @@
+import type { StationKind } from '../names';
+import { remainingAt, WORK_ROUTE } from './bag-counts';
+import { HOUR_MS, type FloorBag, type FloorOrder } from './floor-types';
+
+/** One order's expected finish. */
+export interface OrderEta {
+  orderId: number;
+  code: string;
+  dueAt: string;
+  /** Good pieces each stage of work still owes this order. */
+  remaining: Record<StationKind, number>;
+  /** The stage of work with the most hours left for this order; null when nothing is left. */
+  bottleneck: StationKind | null;
+  /** Pieces per hour used at the bottleneck, and whether it was observed or the shop's standard. */
+  bottleneckRate: number | null;
+  rateSource: 'observed' | 'standard' | null;
+  /** now + remaining pieces at the bottleneck / its rate (ISO 8601); null when nothing is left. */
+  eta: string | null;
+  atRisk: boolean;
+}
+
+/**
+ * ETA for each order. For every stage of work w the order still needs (remaining_w > 0):
+ *   rate_w  = observed good pieces per hour at w, or the shop's standard pieces per hour when none was observed;
+ *   hours_w = remaining_w / rate_w.
+ * The bottleneck is the w with the largest hours_w (ties go to the later stage), and
+ *   ETA = now + hours_bottleneck;  at risk when ETA > due.
+ * The order's pieces flow through the stages together, so the slowest of them sets the finish; this
+ * leaves out the time for the last pieces to pass the stages after it, and other orders sharing the stations.
+ */
+export function orderEtas(
+  orders: readonly FloorOrder[],
+  bags: readonly FloorBag[],
+  observedPiecesPerHour: Record<StationKind, number | null>,
+  standardPiecesPerHour: number,
+  nowMs: number,
+): OrderEta[] {
+  return orders.map((order) => {
+    const mine = bags.filter((b) => b.orderId === order.id);
+    const remaining = Object.fromEntries(
+      WORK_ROUTE.map((w) => [w, mine.reduce((sum, b) => sum + remainingAt(b.pieces, b.counts, w), 0)]),
+    ) as Record<StationKind, number>;
+    let bottleneck: StationKind | null = null;
+    let hours = 0;
+    let rate: number | null = null;
+    for (const w of WORK_ROUTE) {
+      if (remaining[w] === 0) continue;
+      const observed = observedPiecesPerHour[w];
+      const r = observed !== null && observed > 0 ? observed : standardPiecesPerHour;
+      if (remaining[w] / r >= hours) [bottleneck, hours, rate] = [w, remaining[w] / r, r];
+    }
+    const etaMs = bottleneck ? nowMs + hours * HOUR_MS : null;
+    const observedAtBottleneck = bottleneck ? observedPiecesPerHour[bottleneck] : null;
+    return {
+      orderId: order.id,
+      code: order.code,
+      dueAt: order.dueAt,
+      remaining,
+      bottleneck,
+      bottleneckRate: rate,
+      rateSource: bottleneck ? (observedAtBottleneck !== null && observedAtBottleneck > 0 ? 'observed' : 'standard') : null,
+      eta: etaMs === null ? null : new Date(etaMs).toISOString(),
+      atRisk: etaMs !== null && etaMs > Date.parse(order.dueAt),
+    };
+  });
+}

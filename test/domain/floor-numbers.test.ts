@@ -1,0 +1,64 @@
+import { floorNumbers, type FloorInput } from '../../src/shared/floor/floor-numbers';
+import { emptyCounts } from '../../src/shared/floor/bag-counts';
+
+// A small morning worked by hand: shift 07:00-15:00, now 09:00.
+// Press 1 pressed 20 pieces of bag 1 at 08:30 and 10 more at 08:50: 30 in the shift (2 h) = 15 per hour;
+// 30 in the rolling hour 08:00-09:00 = 30 per hour.
+// Bag 1 (order A, 40 pieces) is cut and weeded 40, pressed 30, so it sits in "weeded" with 10 left to press
+// and 40 to pack. Bag 2 (order B, 12 pieces) is still queued.
+// Order A is due at 09:30. Observed press rate for the shift = 15 per hour; nothing packed yet, so pack
+// uses the standard 20 per hour: press needs 10/15 = 0.67 h, pack 40/20 = 2 h, so pack is the
+// bottleneck and the ETA is 09:00 + 2 h = 11:00, after 09:30: at risk (common practice, no published source,
+// for using the slowest remaining stage as the finish estimate).
+const at = (hhmm: string) => `2026-12-02T${hhmm}:00.000Z`;
+const bag1 = { ...emptyCounts(), cut: 40, weeded: 40, pressed: 30 };
+const input: FloorInput = {
+  stations: [{ id: 4, kind: 'press', name: 'Press 1' }],
+  events: [
+    { bagId: 1, stationId: 4, stationKind: 'press', kind: 'press_done', quantity: 20, at: at('08:30') },
+    { bagId: 1, stationId: 4, stationKind: 'press', kind: 'press_done', quantity: 10, at: at('08:50') },
+  ],
+  bags: [
+    { id: 1, orderId: 10, stage: 'weeded', pieces: 40, counts: bag1, queuedAt: at('06:30') },
+    { id: 2, orderId: 11, stage: 'queued', pieces: 12, counts: emptyCounts(), queuedAt: at('08:00') },
+  ],
+  orders: [
+    { id: 10, code: 'A', dueAt: at('09:30') },
+    { id: 11, code: 'B', dueAt: '2026-12-09T15:00:00.000Z' },
+  ],
+  spoils: [{ reason: 'Scorch or shine mark', quantity: 2 }],
+  shift: { startAt: at('07:00'), endAt: at('15:00'), now: at('09:00') },
+  standardPiecesPerHour: 20,
+};
+
+describe('the floor board\'s numbers, put together', () => {
+  const numbers = floorNumbers(input);
+
+  it('gives each station its rolling-hour and shift rates', () => {
+    expect(numbers.stations).toEqual([
+      expect.objectContaining({ stationId: 4, rollingHourPieces: 30, rollingHourPiecesPerHour: 30, shiftPieces: 30, shiftPiecesPerHour: 15 }),
+    ]);
+  });
+
+  it('counts work in progress by stage', () => {
+    expect(numbers.workInProgress.byStage.weeded).toEqual({ bags: 1, pieces: 40 });
+    expect(numbers.workInProgress.byStage.queued).toEqual({ bags: 1, pieces: 12 });
+  });
+
+  it('flags the order whose slowest remaining stage finishes after its due time', () => {
+    const a = numbers.orders.find((order) => order.code === 'A')!;
+    expect(a.bottleneck).toBe('pack');
+    expect(a.eta).toBe(at('11:00'));
+    expect(a.atRisk).toBe(true);
+    expect(numbers.orders.find((order) => order.code === 'B')!.atRisk).toBe(false);
+  });
+
+  it('works out today\'s takt from the time left and the pieces due by the shift end', () => {
+    // 09:00 to 15:00 = 21,600 s; order A's 40 unpacked pieces are due today: 540 s per piece.
+    expect(numbers.takt).toEqual({ availableSeconds: 21_600, piecesDue: 40, secondsPerPiece: 540 });
+  });
+
+  it('ranks the spoil reasons', () => {
+    expect(numbers.spoilReasons[0]).toEqual({ reason: 'Scorch or shine mark', quantity: 2, share: 1, cumulativeShare: 1 });
+  });
+});

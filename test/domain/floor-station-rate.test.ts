@@ -1,0 +1,31 @@
+import type { FloorEvent } from '../../src/shared/floor/floor-types';
+import { stationRates } from '../../src/shared/floor/station-rate';
+import { workInProgress } from '../../src/shared/floor/work-in-progress';
+
+const cutter = [{ id: 1, kind: 'cut' as const, name: 'Cut 1' }];
+const e = (kind: FloorEvent['kind'], quantity: number, at: string, stationId = 1): FloorEvent => ({ bagId: 1, stationId, stationKind: 'cut', kind, quantity, at: `2026-03-02T${at}:00Z` });
+
+describe('pieces per hour per station', () => {
+  it('counts only good pieces, over the rolling hour and over the shift so far', () => {
+    // Worked by hand: shift from 06:00, now 09:00. Rolling hour (08:00, 09:00]: 45 + 15 = 60 -> 60/h.
+    // Shift: 30 + 45 + 15 = 90 over 3 h = 30/h. The spoil, the scan and the other station's pieces are not counted.
+    const events = [e('cut_done', 30, '07:00'), e('cut_done', 45, '08:30'), e('cut_done', 15, '09:00'), e('spoil', 5, '08:45'), e('scan', 0, '08:50'), e('cut_done', 99, '08:40', 2)];
+    const [rate] = stationRates(cutter, events, { startAt: '2026-03-02T06:00:00Z', endAt: '2026-03-02T14:30:00Z', now: '2026-03-02T09:00:00Z' });
+    expect(rate).toMatchObject({ rollingHourPieces: 60, rollingHourPiecesPerHour: 60, shiftPieces: 90, shiftPiecesPerHour: 30 });
+  });
+
+  it('shortens the rolling hour to the time since the shift start early in the shift', () => {
+    // Worked by hand: now 06:30, 20 pieces since 06:00 -> 20 / 0.5 h = 40/h.
+    const [rate] = stationRates(cutter, [e('cut_done', 20, '06:20'), e('cut_done', 7, '05:50')], { startAt: '2026-03-02T06:00:00Z', endAt: '2026-03-02T14:30:00Z', now: '2026-03-02T06:30:00Z' });
+    expect(rate.rollingHourPiecesPerHour).toBe(40);
+  });
+});
+
+describe('work in progress', () => {
+  it('counts each bag with all its pieces in its current stage and leaves packed bags off the floor total', () => {
+    const wip = workInProgress([{ stage: 'queued', pieces: 12 }, { stage: 'weeded', pieces: 5 }, { stage: 'weeded', pieces: 7 }, { stage: 'packed', pieces: 30 }]);
+    expect(wip.byStage.weeded).toEqual({ bags: 2, pieces: 12 });
+    expect(wip.byStage.cut).toEqual({ bags: 0, pieces: 0 });
+    expect(wip.inSystem).toEqual({ bags: 3, pieces: 24 });
+  });
+});
