@@ -46,6 +46,15 @@ test('the lead signs in, sees the navigation, pairs this tablet with Press 1 and
     await screenshotAt(page, 'stations-paired', { width: 1280, height: 800 });
   });
 
+  await test.step('the People screen lists who works here and how each signs in', async () => {
+    await page.getByRole('navigation', { name: 'Screens' }).getByRole('link', { name: 'People' }).click();
+    const jo = page.getByTestId('person').filter({ has: page.getByRole('heading', { name: DEMO_ACCOUNTS.operators[0].name }) });
+    await expect(jo).toContainText('Signs in at a station with a PIN');
+    await expect(jo.getByRole('button', { name: 'Set PIN' })).toBeVisible();
+    await screenshotAt(page, 'people');
+    await screenshotAt(page, 'people', { width: 1280, height: 800 });
+  });
+
   await test.step('sign out: the lead\'s screens are gone and the hub has ended the session', async () => {
     await page.getByRole('button', { name: 'Sign out', exact: true }).click();
     await expect(page.getByTestId('signed-in-person')).toHaveCount(0);

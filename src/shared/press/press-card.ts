@@ -2,7 +2,7 @@ import type { PeelKind, PressureClass } from '../names';
 import { geometryProblems, maxGaugePsiFromKpa, overMaximumProblem, readingForPressureClass, type AirPressGeometry } from './air-press';
 import { pressCautions } from './cautions';
 import { forceReading, pressureReading, temperatureReading } from './dual-units';
-import type { LowTempSuggestion, PressCard, PressCardLayer, PressGauge, PressStep } from './press-contract';
+import type { LowTempSuggestion, PressCard, PressCardLayer, PressGauge, PressStep, RecipeRecord } from './press-contract';
 import { celsiusToFahrenheit, mmToInches, roundTo, type ShopUnits } from './units';
 
 /**
@@ -30,20 +30,7 @@ export interface CardFilmType {
 }
 
 /** A Recipe book entry in stored units (°C, s). */
-export interface CardRecipe {
-  id: number;
-  filmTypeId: number;
-  fabricId: number;
-  tempC: number;
-  dwellS: number;
-  pressureClass: PressureClass;
-  peel: PeelKind;
-  prePressS: number;
-  tackS: number;
-  secondPressS: number | null;
-  notes: string;
-  source: string;
-}
+export type CardRecipe = RecipeRecord;
 
 /** The garment's fabric and the hottest it takes. */
 export interface CardFabric {

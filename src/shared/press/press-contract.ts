@@ -109,23 +109,18 @@ export interface GaugeReply {
   targetGaugeKPa?: number;
 }
 
-/** A recipe in the Recipe book (GET /api/recipes). */
-export interface RecipeListItem {
+/** A recipe as stored (°C, s), with its film type and fabric. */
+export interface RecipeRecord extends Required<RecipeValues> {
   id: number;
   filmTypeId: number;
-  filmTypeName: string;
   fabricId: number;
+}
+
+/** A recipe in the Recipe book (GET /api/recipes). */
+export interface RecipeListItem extends RecipeRecord {
+  filmTypeName: string;
   fabricName: string;
-  tempC: number;
   tempF: number;
-  dwellS: number;
-  pressureClass: PressureClass;
-  peel: PeelKind;
-  prePressS: number;
-  tackS: number;
-  secondPressS: number | null;
-  notes: string;
-  source: string;
   updatedAt: string;
 }
 
