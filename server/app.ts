@@ -32,6 +32,15 @@ import { FloorBroadcast } from './events/floor-broadcast';
 import { photosRouter } from './spoils/photos-router';
 import { spoilReasonsRouter } from './spoils/spoil-reasons-router';
 import { ticketsRouter } from './tickets/tickets-router';
+import { boardRouter } from './board/board-router';
+import { BoardService } from './board/board-service';
+import type { EventFollowers } from './events/event-followers';
+import { MailOutbox } from './mail/mail-outbox';
+import { mailRouter } from './mail/mail-router';
+import { ShiftSummaryScheduler } from './mail/shift-summary-scheduler';
+import { OrderReadiness } from './orders/order-readiness';
+import { RollLowNotice } from './rolls/roll-low-notice';
+import { reportsRouter } from './reports/reports-router';
 
 /** What the hub needs from outside to build its app. */
 export interface AppDeps {
@@ -45,10 +54,25 @@ export interface AppDeps {
 /** The largest JSON body the API reads; a station's event batch fits many times over. */
 export const JSON_BODY_LIMIT = '256kb';
 
+/** What createApp builds besides the app: the socket server's event followers and the mail, which startHub starts and stops. */
+export interface AppParts {
+  app: express.Express;
+  session: RequestHandler;
+  floor: FloorBroadcast;
+  followers: EventFollowers;
+  mail: MailOutbox;
+  shiftSummary: ShiftSummaryScheduler;
+}
+
 /** Builds the hub's Express app (no listening): the API under /api and the built client. */
-export function createApp({ db, env, sessionSecret, logger, browserDist }: AppDeps): { app: express.Express; session: RequestHandler; floor: FloorBroadcast } {
+export function createApp({ db, env, sessionSecret, logger, browserDist }: AppDeps): AppParts {
   const app = express();
   const floor = new FloorBroadcast();
+  // Mail waits in the outbox until startHub starts it; a bare app (as in supertest) only queues.
+  const mail = new MailOutbox(db, { smtpUrl: env.SMTP_URL, mailFrom: env.MAIL_FROM, logger });
+  const followers: EventFollowers = { floor, readiness: new OrderReadiness(db, mail, logger) };
+  const board = new BoardService(db);
+  const shiftSummary = new ShiftSummaryScheduler(db, mail, (now) => board.board(now), logger);
   app.set('trust proxy', env.TRUST_PROXY ? 1 : false);
   app.disable('x-powered-by');
 
@@ -107,17 +131,20 @@ export function createApp({ db, env, sessionSecret, logger, browserDist }: AppDe
   api.use('/press-cards', pressCardsRouter(db));
   api.use('/presses', pressesRouter(db));
   api.use('/recipes', recipesRouter(db));
-  api.use('/events', eventsRouter(db, floor));
+  api.use('/events', eventsRouter(db, followers));
   api.use('/tickets', ticketsRouter(db));
   api.use('/spoil-reasons', spoilReasonsRouter(db));
   api.use('/spoils', photosRouter(db, env));
-  api.use(cutPlansRouter(db, env, floor));
+  api.use(cutPlansRouter(db, env, floor, new RollLowNotice(mail)));
   api.use(cuttersRouter(db, floor));
   api.use('/rolls', rollsRouter(db));
+  api.use('/board', boardRouter(db));
+  api.use('/reports', reportsRouter(db));
+  api.use('/mail', mailRouter(db, mail, shiftSummary));
   api.use(apiNotFound);
 
   app.use('/api', api);
   app.use(staticApp(browserDist));
   app.use(errorHandler);
-  return { app, session, floor };
+  return { app, session, floor, followers, mail, shiftSummary };
 }

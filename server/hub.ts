@@ -10,6 +10,7 @@ import { browserDist } from './config/paths';
 import { sessionSecret } from './config/session-secret';
 import { knexConfig } from './db/connection';
 import type { Db } from './db/tables';
+import type { MailOutbox } from './mail/mail-outbox';
 import { attachSocketServer, type Hub } from './realtime/socket-server';
 
 /** A running hub: its address and a clean way to stop it. */
@@ -18,6 +19,8 @@ export interface RunningHub {
   port: number;
   db: Db;
   io: Hub;
+  /** The outbox; its sink holds what was sent when no SMTP_URL is set. */
+  mail: MailOutbox;
   close(): Promise<void>;
 }
 
@@ -26,14 +29,18 @@ export async function startHub(env: Env, databaseUrl: string): Promise<RunningHu
   const tls = tlsFiles(env);
   const logger = pino({ level: env.LOG_LEVEL });
   const db = knex(knexConfig(databaseUrl));
-  const { app, session, floor } = createApp({ db, env, logger, sessionSecret: sessionSecret(env.SESSION_SECRET), browserDist });
+  const { app, session, followers, mail, shiftSummary } = createApp({ db, env, logger, sessionSecret: sessionSecret(env.SESSION_SECRET), browserDist });
   const httpServer: Server = tls ? createTlsServer(tls, app) : createServer(app);
-  const io = attachSocketServer(httpServer, db, session, floor);
+  const io = attachSocketServer(httpServer, db, session, followers);
 
   await new Promise<void>((resolve, reject) => {
     httpServer.once('error', reject);
     httpServer.listen(env.PORT, env.HOST, resolve);
   });
+  // Sends what was queued before a restart, and readies any order whose last batch committed just before it.
+  await mail.start();
+  await followers.readiness?.sweep();
+  shiftSummary.start();
   const { port } = httpServer.address() as AddressInfo;
   const host = env.HOST === '0.0.0.0' || env.HOST === '::' ? '127.0.0.1' : env.HOST;
 
@@ -42,7 +49,10 @@ export async function startHub(env: Env, databaseUrl: string): Promise<RunningHu
     port,
     db,
     io,
+    mail,
     async close() {
+      shiftSummary.stop();
+      await mail.close();
       // socket.io closes the HTTP server too; then the pool, so no query is cut off mid-way.
       await new Promise<void>((resolve) => io.close(() => resolve()));
       await db.destroy();

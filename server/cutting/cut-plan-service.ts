@@ -23,6 +23,7 @@ import { toBladeState, toCutterMedia, toCutterView } from '../cutters/cutter-vie
 import type { Db } from '../db/tables';
 import type { DesignStore } from '../designs/design-store';
 import { badRequest, conflict, notFound } from '../http/http-error';
+import type { RollLowNotice } from '../rolls/roll-low-notice';
 import { toRollView, type RollWithFilm } from '../rolls/roll-view';
 import { cutterLayoutSvg } from './cutter-layout-svg';
 import { BagNotWaitingError, CuttingRepository, type FilmWithType, type QueuedLayer } from './cutting-repository';
@@ -49,6 +50,7 @@ export class CutPlanService {
     db: Db,
     private readonly store: DesignStore,
     private readonly events: CutFloorEvents,
+    private readonly lowNotice?: RollLowNotice,
   ) {
     this.cutting = new CuttingRepository(db);
     this.cutters = new CuttersRepository(db);
@@ -181,6 +183,8 @@ export class CutPlanService {
           );
           await this.events.record(trx, reporterAt(principal, station), events);
         },
+        // Film running low is queued with the cut itself, so the message is never lost and never sent twice.
+        afterRollChange: this.lowNotice ? (trx, rollId) => this.lowNotice!.afterCut(trx, rollId) : undefined,
       })
       .catch((error: unknown) => {
         if (error instanceof BagNotWaitingError) {
@@ -191,6 +195,7 @@ export class CutPlanService {
       });
 
     this.events.announce(result.completeBagIds, await this.cutters.bagsVersion(result.completeBagIds));
+    this.lowNotice?.kick();
     const after = (await this.cutting.roll(roll.id))!;
     const waitingBagIds = input.bagIds.filter((id) => !result.completeBagIds.includes(id));
     const waitingNote = waitingBagIds.length > 0 ? ` ${waitingBagIds.length} bag(s) still need another layer film cut.` : '';

@@ -4,15 +4,16 @@ import { CutFloorEvents } from '../cutters/cut-events';
 import type { FloorBroadcast } from '../events/floor-broadcast';
 import type { Env } from '../config/env';
 import type { Db } from '../db/tables';
+import type { RollLowNotice } from '../rolls/roll-low-notice';
 import { DesignStore, designsDir } from '../designs/design-store';
 import { validate } from '../http/validate';
 import { CutPlanService } from './cut-plan-service';
 import { confirmBody, layoutQuery, previewBody } from './cut-plan-schemas';
 
 /** /api/cut-groups and /api/cut-plans/* (mounted at /api). */
-export function cutPlansRouter(db: Db, env: Env, floor?: FloorBroadcast): Router {
+export function cutPlansRouter(db: Db, env: Env, floor?: FloorBroadcast, lowNotice?: RollLowNotice): Router {
   const router = Router();
-  const plans = new CutPlanService(db, new DesignStore(designsDir(env.UPLOADS_DIR)), new CutFloorEvents(floor));
+  const plans = new CutPlanService(db, new DesignStore(designsDir(env.UPLOADS_DIR)), new CutFloorEvents(floor), lowNotice);
   // Operators at any station may read plans; only a cut station may confirm (checked in the service).
   const cutFloor = allowRoles('owner', 'lead', 'operator');
 

@@ -43,6 +43,8 @@ export interface CutRecord {
   deduct(roll: RollRow): { remainingMm: number };
   /** Runs inside the same transaction once the cut is written, with the bags whose every layer is now cut. */
   recordEvents(trx: Db, completeBagIds: number[]): Promise<void>;
+  /** Runs inside the same transaction once the roll is shortened (e.g. to report it running low). */
+  afterRollChange?(trx: Db, rollId: number): Promise<unknown>;
 }
 
 /** Thrown inside the confirm transaction when a bag is no longer waiting for this film. */
@@ -135,6 +137,7 @@ export class CuttingRepository {
         for (const row of rows) if (Number(row.cut) >= Number(row.layers)) completeBagIds.push(row.id);
       }
       await cut.recordEvents(trx, completeBagIds);
+      await cut.afterRollChange?.(trx, cut.rollId);
       return { movementId: movementId!, completeBagIds };
     });
   }

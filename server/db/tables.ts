@@ -283,6 +283,8 @@ export interface MailLogRow {
   related: Record<string, unknown>;
   created_at: Date;
   sent_at: Date | null;
+  /** When the outbox may next try it; null once sent, or when it waits for a lead's retry. */
+  next_attempt_at: Date | null;
 }
 
 /** One change to a roll's remaining length: received, cut (layout plus test cut) or measured. */

@@ -5,7 +5,7 @@ import type { Db } from '../db/tables';
 import { applyEvent, DONE_STAGE, KINDS_FOR_STATION, overCountProblems, stageOf, type BagCounts } from '../../src/shared/events/bag-progress';
 import { payloadSchemas, stationEventSchema } from './event-schemas';
 import { EventsRepository, type LockedBag } from './events-repository';
-import type { FloorBroadcast } from './floor-broadcast';
+import type { EventFollowers } from './event-followers';
 
 /** How far ahead of the hub's clock a tablet's clock may run before its events are refused. */
 export const MAX_CLIENT_AHEAD_MS = 5 * 60 * 1000;
@@ -42,8 +42,8 @@ const countsOf = (bag: LockedBag, spoiledAt: Record<StationKind, number>): BagCo
 export class EventsService {
   private readonly repository: EventsRepository;
 
-  /** `db` may be a Knex transaction; then pass no broadcaster and broadcast after your commit. */
-  constructor(db: Db, private readonly floor?: FloorBroadcast) {
+  /** `db` may be a Knex transaction; then pass no followers and tell the floor after your commit. */
+  constructor(db: Db, private readonly followers?: EventFollowers) {
     this.repository = new EventsRepository(db);
   }
 
@@ -64,7 +64,9 @@ export class EventsService {
       else reply.rejected.push({ id, error: outcome.error });
     }
     if (principal.station) await this.repository.markSynced(principal.station.id, now);
-    this.floor?.bagsChanged([...changed], version);
+    // After the commit: an order whose last bag was packed becomes ready before the board is told.
+    await this.followers?.readiness?.bagsChanged([...changed]);
+    this.followers?.floor.bagsChanged([...changed], version);
     return reply;
   }
 

@@ -6,14 +6,14 @@ import { resolvePrincipal, type Principal } from '../auth/principal';
 import type { Db } from '../db/tables';
 import { eventBatchSchema } from './event-schemas';
 import { EventsService } from './events-service';
-import type { FloorBroadcast } from './floor-broadcast';
+import type { EventFollowers } from './event-followers';
 
 type HubSocket = Socket<ClientToServerEvents, ServerToClientEvents, Record<string, never>, { principal: Principal }>;
 type IncomingRequest = Parameters<RequestHandler>[0];
 
 /** Registers events:push on a connected socket: the batch goes through the same EventsService as POST /api/events. */
-export function handleEventPushes(socket: HubSocket, db: Db, floor: FloorBroadcast): void {
-  const events = new EventsService(db, floor);
+export function handleEventPushes(socket: HubSocket, db: Db, followers: EventFollowers): void {
+  const events = new EventsService(db, followers);
   socket.on('events:push', async (batch, ack) => {
     if (typeof ack !== 'function') return;
     const parsed = eventBatchSchema.safeParse(batch);

@@ -60,7 +60,14 @@ export class RollsRepository {
     return this.db.transaction(async (trx) => {
       const roll = await trx('rolls').where({ id }).forUpdate().first();
       if (!roll) return false;
-      await trx('rolls').where({ id }).update({ remaining_mm: remainingMm, emptied_at: remainingMm === 0 ? trx.fn.now(3) : null });
+      await trx('rolls')
+        .where({ id })
+        .update({
+          remaining_mm: remainingMm,
+          emptied_at: remainingMm === 0 ? trx.fn.now(3) : null,
+          // Back at or above its reorder length (restocked, or measured longer): the next time it runs low, tell the lead again.
+          ...(remainingMm >= roll.reorder_mm ? { low_notified_at: null } : {}),
+        });
       await trx('roll_movements').insert({
         roll_id: id,
         kind: 'measure',
@@ -71,6 +78,11 @@ export class RollsRepository {
       });
       return true;
     });
+  }
+
+  /** Marks a low roll as reported; false when it was reported already (another cut got there first). */
+  async markLowNotified(id: number, at: Date): Promise<boolean> {
+    return (await this.db('rolls').where({ id }).whereNull('low_notified_at').update({ low_notified_at: at })) === 1;
   }
 
   /** A roll's history, newest first. */

@@ -3,12 +3,12 @@ import { Routes } from '@angular/router';
 import { roleGuard, signedInGuard } from './auth/auth-guard';
 import { Role, Session } from './auth/session';
 
-/** Where each role starts; a wall display has no screen yet, so it goes back to sign-in. */
+/** Where each role starts; a wall display shows the floor board outside the shell. */
 const HOME_BY_ROLE: Record<Role, string> = {
   owner: 'stations',
   lead: 'stations',
   operator: 'station-home',
-  display: '/sign-in',
+  display: '/display',
 };
 
 /** The app's screens. */
@@ -24,6 +24,12 @@ export const routes: Routes = [
     loadComponent: () => import('./auth/pin-pad').then((m) => m.PinPad),
   },
   {
+    // A wall screen: no navigation; it signs itself in with the token from its display link.
+    path: 'display',
+    title: 'Floor board · Dwell',
+    loadComponent: () => import('./board/wall-display').then((m) => m.WallDisplay),
+  },
+  {
     path: '',
     canActivate: [signedInGuard],
     loadComponent: () => import('./shell/shell').then((m) => m.Shell),
@@ -35,6 +41,13 @@ export const routes: Routes = [
           const role = inject(Session).role();
           return role ? HOME_BY_ROLE[role] : '/sign-in';
         },
+      },
+      {
+        path: 'board',
+        title: 'Floor board · Dwell',
+        canActivate: [roleGuard],
+        data: { roles: ['owner', 'lead'] satisfies Role[] },
+        loadComponent: () => import('./board/floor-board').then((m) => m.FloorBoard),
       },
       {
         path: 'people',
@@ -90,6 +103,27 @@ export const routes: Routes = [
         canActivate: [roleGuard],
         data: { roles: ['operator'] satisfies Role[] },
         loadComponent: () => import('./weed/weed-tally').then((m) => m.WeedTally),
+      },
+      {
+        path: 'pack',
+        title: 'Pack check · Dwell',
+        canActivate: [roleGuard],
+        data: { roles: ['operator'] satisfies Role[] },
+        loadComponent: () => import('./pack/pack-check').then((m) => m.PackCheck),
+      },
+      {
+        path: 'mail',
+        title: 'Mail outbox · Dwell',
+        canActivate: [roleGuard],
+        data: { roles: ['owner', 'lead'] satisfies Role[] },
+        loadComponent: () => import('./mail/mail-outbox').then((m) => m.MailOutbox),
+      },
+      {
+        path: 'reports',
+        title: 'Reports · Dwell',
+        canActivate: [roleGuard],
+        data: { roles: ['owner', 'lead'] satisfies Role[] },
+        loadComponent: () => import('./reports/floor-report').then((m) => m.FloorReport),
       },
       {
         path: 'spoil',

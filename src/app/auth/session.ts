@@ -72,6 +72,13 @@ export class Session {
     return response;
   }
 
+  /** Signs in a wall display with the device token from its display link. */
+  async signInAsDisplay(deviceToken: string): Promise<SessionResponse> {
+    const response = await firstValueFrom(this.http.post<SessionResponse>('/api/auth/display', { deviceToken }));
+    this.adopt(response);
+    return response;
+  }
+
   /** Ends the session on the hub and here; here even when the hub cannot be reached. */
   async signOut(): Promise<void> {
     try {

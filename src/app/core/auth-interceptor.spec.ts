@@ -55,6 +55,19 @@ describe('authInterceptor', () => {
     expect(navigate).not.toHaveBeenCalled();
   });
 
+  it('leaves a wall display on its page when its session ends, so the page can sign in again with its token', async () => {
+    const displayIn = session.signInAsDisplay('spec-display-token-000000000000');
+    http.expectOne('/api/auth/display').flush({ user: { id: 4, name: 'Spec wall', email: null, role: 'display' }, station: null });
+    await displayIn;
+
+    const call = firstValueFrom(client.get('/api/board'));
+    http.expectOne('/api/board').flush({ error: 'Sign in first.' }, { status: 401, statusText: 'Unauthorized' });
+
+    await expect(call).rejects.toMatchObject({ status: 401 });
+    expect(session.signedIn()).toBe(false);
+    expect(navigate).not.toHaveBeenCalled();
+  });
+
   it('does not sign out on other failures of data calls', async () => {
     const call = firstValueFrom(client.get('/api/stations'));
     http.expectOne('/api/stations').flush({ error: 'Only a lead can see this.' }, { status: 403, statusText: 'Forbidden' });

@@ -13,8 +13,10 @@ export const authInterceptor: HttpInterceptorFn = (request, next) => {
   return next(request).pipe(
     catchError((error: unknown) => {
       if (watched && error instanceof HttpErrorResponse && error.status === 401) {
+        // A wall display has no one to type a password: its page signs in again with its own token.
+        const wallDisplay = session.role() === 'display';
         session.clear();
-        void router.navigateByUrl('/sign-in');
+        if (!wallDisplay) void router.navigateByUrl('/sign-in');
       }
       return throwError(() => error);
     }),

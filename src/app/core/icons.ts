@@ -64,6 +64,20 @@ import sync from '@material-symbols/svg-400/rounded/sync.svg';
 import personAdd from '@material-symbols/svg-400/rounded/person_add.svg';
 import key from '@material-symbols/svg-400/rounded/key.svg';
 import group from '@material-symbols/svg-400/rounded/group.svg';
+import monitoring from '@material-symbols/svg-400/rounded/monitoring.svg';
+import wifi from '@material-symbols/svg-400/rounded/wifi.svg';
+import wifiOff from '@material-symbols/svg-400/rounded/wifi_off.svg';
+import tv from '@material-symbols/svg-400/rounded/tv.svg';
+import contentCopy from '@material-symbols/svg-400/rounded/content_copy.svg';
+import checkCircle from '@material-symbols/svg-400/rounded/check_circle.svg';
+import flag from '@material-symbols/svg-400/rounded/flag.svg';
+import mail from '@material-symbols/svg-400/rounded/mail.svg';
+import barChart from '@material-symbols/svg-400/rounded/bar_chart.svg';
+import schedule from '@material-symbols/svg-400/rounded/schedule.svg';
+import refresh from '@material-symbols/svg-400/rounded/refresh.svg';
+import send from '@material-symbols/svg-400/rounded/send.svg';
+import article from '@material-symbols/svg-400/rounded/article.svg';
+import visibility from '@material-symbols/svg-400/rounded/visibility.svg';
 
 /** Every icon the app shows, by the name templates use in `svgIcon`. Only these are bundled. */
 const ICONS: Readonly<Record<string, string>> = {
@@ -131,6 +145,20 @@ const ICONS: Readonly<Record<string, string>> = {
   'done-all': doneAll,
   spoil: report,
   remove,
+  'floor-board': monitoring,
+  online: wifi,
+  offline: wifiOff,
+  'wall-display': tv,
+  copy: contentCopy,
+  'on-time': checkCircle,
+  flag,
+  'mail-outbox': mail,
+  reports: barChart,
+  schedule,
+  refresh,
+  send,
+  article,
+  visibility,
 };
 
 /** Registers Dwell's bundled SVG icons; nothing is fetched at run time. */

@@ -13,10 +13,10 @@ export interface NavEntry {
 
 /** Every screen the top bar can offer, and who may see it. */
 export const NAV_ENTRIES: readonly NavEntry[] = [
+  { path: '/board', label: 'Floor board', icon: 'floor-board', roles: ['owner', 'lead'] },
   { path: '/orders', label: 'Orders', icon: 'orders', roles: ['owner', 'lead'] },
   { path: '/stations', label: 'Stations', icon: 'tablet', roles: ['owner', 'lead'] },
-  // Stations with a screen of their own reach the station home through the wordmark; the pack station has none yet.
-  { path: '/station-home', label: 'Station home', icon: 'qr-scan', roles: ['operator'], stationKinds: ['pack'] },
+  { path: '/pack', label: 'Pack check', icon: 'station-pack', roles: ['operator'], stationKinds: ['pack'] },
   { path: '/gang-planner', label: 'Gang planner', icon: 'gang-planner', roles: ['owner', 'lead'] },
   { path: '/roll-rack', label: 'Roll rack', icon: 'roll-rack', roles: ['owner', 'lead'] },
   { path: '/cut-station', label: 'Cut station', icon: 'station-cut', roles: ['operator'], stationKinds: ['cut'] },
@@ -27,6 +27,8 @@ export const NAV_ENTRIES: readonly NavEntry[] = [
   { path: '/press', label: 'Press card', icon: 'station-press', roles: ['operator'], stationKinds: ['press'] },
   { path: '/recipes', label: 'Recipe book', icon: 'recipe-book', roles: ['owner', 'lead'] },
   { path: '/people', label: 'People', icon: 'people', roles: ['owner', 'lead'] },
+  { path: '/reports', label: 'Reports', icon: 'reports', roles: ['owner', 'lead'] },
+  { path: '/mail', label: 'Mail outbox', icon: 'mail-outbox', roles: ['owner', 'lead'] },
 ];
 
 /** The entries a person with `role` may use, at a station of `stationKind` (null away from a station). */

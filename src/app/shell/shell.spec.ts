@@ -46,13 +46,13 @@ describe('Shell', () => {
   it('offers a lead the office screens and not the station home', async () => {
     await renderSignedInAs('lead');
 
-    expect(navLabels()).toEqual(['Orders', 'Stations', 'Gang planner', 'Roll rack', 'Recipe book', 'People']);
+    expect(navLabels()).toEqual(['Floor board', 'Orders', 'Stations', 'Gang planner', 'Roll rack', 'Recipe book', 'People', 'Reports', 'Mail outbox']);
   });
 
   it('offers an owner the office screens, People included', async () => {
     await renderSignedInAs('owner');
 
-    expect(navLabels()).toEqual(['Orders', 'Stations', 'Gang planner', 'Roll rack', 'Recipe book', 'People']);
+    expect(navLabels()).toEqual(['Floor board', 'Orders', 'Stations', 'Gang planner', 'Roll rack', 'Recipe book', 'People', 'Reports', 'Mail outbox']);
   });
 
   it('offers the Cut station, Gang planner and Roll rack to an operator only at a cut station', () => {
@@ -75,7 +75,7 @@ describe('Shell', () => {
 
   it('offers a press operator just the press card and the spoil report, so the bar stays one row', () => {
     expect(navEntriesFor('operator', 'press').map((entry) => entry.label)).toEqual(['Spoil report', 'Press card']);
-    expect(navEntriesFor('operator', 'pack').map((entry) => entry.label)).toEqual(['Station home', 'Spoil report']);
+    expect(navEntriesFor('operator', 'pack').map((entry) => entry.label)).toEqual(['Pack check', 'Spoil report']);
   });
 
   it('shows who is signed in and their role', async () => {

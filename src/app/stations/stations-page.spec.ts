@@ -45,6 +45,7 @@ describe('StationsPage', () => {
     fixture = TestBed.createComponent(StationsPage);
     fixture.detectChanges();
     http.expectOne({ method: 'GET', url: '/api/stations' }).flush(STATIONS);
+    http.expectOne({ method: 'GET', url: '/api/displays' }).flush([]);
     await settle();
   });
 

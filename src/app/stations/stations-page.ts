@@ -10,16 +10,17 @@ import { DevicePairing } from '../auth/device-pairing';
 import { Session } from '../auth/session';
 import { KIND_DISPLAY } from './station-kinds';
 import { StationListItem, StationsApi } from './stations-api';
+import { WallDisplays } from './wall-displays';
 
 type StationsState =
   | { status: 'loading' }
   | { status: 'loaded'; stations: StationListItem[] }
   | { status: 'failed'; sentence: string };
 
-/** The shop's stations for an owner or lead, and pairing this tablet with one of them. */
+/** The shop's stations for an owner or lead, pairing this tablet with one of them, and the wall displays. */
 @Component({
   selector: 'dw-stations-page',
-  imports: [DatePipe, MatButtonModule, MatIconModule],
+  imports: [DatePipe, MatButtonModule, MatIconModule, WallDisplays],
   templateUrl: './stations-page.html',
   styleUrl: './stations-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -1,0 +1,78 @@
+import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
+import type { ChartData, ChartOptions } from 'chart.js';
+import { BaseChartDirective } from 'ng2-charts';
+import type { BoardHourly } from '../../shared/board-contract';
+import { chartLook, provideBoardCharts, type BoardMode } from './board-charts';
+import { clock } from './board-format';
+
+/** Good pieces per station in each hour of the shift, as lines, with a table of the same numbers. */
+@Component({
+  selector: 'dw-station-rates-chart',
+  imports: [BaseChartDirective],
+  providers: [provideBoardCharts()],
+  templateUrl: './station-rates-chart.html',
+  styleUrl: './board-chart.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class StationRatesChart {
+  readonly hourly = input.required<BoardHourly>();
+  readonly mode = input<BoardMode>('lead');
+
+  protected readonly hourLabels = computed(() => this.hourly().hours.map((hour) => clock(hour)));
+  protected readonly hasData = computed(() => this.hourly().hours.length > 0 && this.hourly().stations.length > 0);
+
+  protected readonly data = computed((): ChartData<'line', number[], string> => {
+    const look = chartLook(this.mode());
+    return {
+      labels: this.hourLabels(),
+      datasets: this.hourly().stations.map((station, index) => {
+        const colour = look.series[index % look.series.length]!;
+        return {
+          label: station.name,
+          data: station.pieces,
+          borderColor: colour,
+          backgroundColor: colour,
+          borderDash: look.dashes[index % look.dashes.length],
+          pointStyle: look.points[index % look.points.length],
+          pointRadius: look.fontPx / 3,
+          borderWidth: look.fontPx / 5,
+          tension: 0,
+        };
+      }),
+    };
+  });
+
+  protected readonly options = computed((): ChartOptions<'line'> => {
+    const look = chartLook(this.mode());
+    const font = { size: look.fontPx, family: "'Atkinson Hyperlegible', system-ui, sans-serif" };
+    return {
+      responsive: true,
+      maintainAspectRatio: false,
+      // Redrawn on every event: movement would distract more than it explains.
+      animation: false,
+      color: look.ink,
+      plugins: {
+        legend: { position: 'bottom', labels: { usePointStyle: true, color: look.ink, font } },
+        tooltip: { enabled: this.mode() === 'lead' },
+      },
+      scales: {
+        x: { ticks: { color: look.ink, font }, grid: { color: look.grid } },
+        y: {
+          beginAtZero: true,
+          ticks: { color: look.ink, font, precision: 0 },
+          grid: { color: look.grid },
+          title: { display: true, text: 'pieces in the hour', color: look.ink, font },
+        },
+      },
+    };
+  });
+
+  /** What the canvas says to a screen reader: the latest hour for each station. */
+  protected readonly summary = computed(() => {
+    const { hours, stations } = this.hourly();
+    if (hours.length === 0) return 'Pieces per hour by station: no hours of this shift yet.';
+    const last = hours.length - 1;
+    const latest = stations.map((station) => `${station.name} ${station.pieces[last] ?? 0}`).join(', ');
+    return `Pieces per hour by station since ${clock(hours[0]!)}. Hour from ${clock(hours[last]!)}: ${latest}.`;
+  });
+}

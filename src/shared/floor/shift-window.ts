@@ -1,0 +1,98 @@
+import { TZDate } from '@date-fns/tz';
+import type { FloorShift } from './floor-types';
+
+/** A span of local time given as ISO 8601 instants: start included, end excluded. */
+export interface LocalSpan {
+  startAt: string;
+  endAt: string;
+}
+
+const CLOCK = /^([01]\d|2[0-3]):([0-5]\d)(?::([0-5]\d))?$/;
+const DAY = /^(\d{4})-(\d{2})-(\d{2})$/;
+
+/** Reads a wall-clock time 'HH:MM' (or 'HH:MM:SS', as the database gives it back). */
+export function parseClock(clock: string): { hours: number; minutes: number; seconds: number } {
+  const match = CLOCK.exec(clock);
+  if (!match) throw new RangeError(`"${clock}" is not a time of day: write it as HH:MM, e.g. 07:00.`);
+  return { hours: Number(match[1]), minutes: Number(match[2]), seconds: Number(match[3] ?? 0) };
+}
+
+/** Throws a RangeError with a sentence when the time zone is not an IANA name this runtime knows. */
+export function checkTimeZone(timeZone: string): void {
+  try {
+    new Intl.DateTimeFormat('en-GB', { timeZone });
+  } catch {
+    throw new RangeError(`"${timeZone}" is not a known time zone: use an IANA name such as Europe/London.`);
+  }
+}
+
+/** The calendar date 'YYYY-MM-DD' an instant falls on in the time zone. */
+export function localDate(at: Date, timeZone: string): string {
+  const local = new TZDate(at.getTime(), timeZone);
+  return `${local.getFullYear()}-${pad(local.getMonth() + 1)}-${pad(local.getDate())}`;
+}
+
+/** The local calendar day [start, end) in the time zone; a day the clocks change is 23 or 25 hours long. */
+export function localDaySpan(day: string, timeZone: string): LocalSpan {
+  const { year, month, date } = parseDay(day);
+  return {
+    startAt: wallClock(year, month, date, 0, 0, 0, timeZone).toISOString(),
+    endAt: wallClock(year, month, date + 1, 0, 0, 0, timeZone).toISOString(),
+  };
+}
+
+/** The local days from `from` to `to`, both included, in order. */
+export function localDaysBetween(from: string, to: string): string[] {
+  const days: string[] = [];
+  const start = parseDay(from);
+  // Calendar arithmetic in UTC: a day is a date, not 24 hours of some zone.
+  for (let d = Date.UTC(start.year, start.month, start.date); ; d += 86_400_000) {
+    const day = new Date(d).toISOString().slice(0, 10);
+    if (day > to) return days;
+    days.push(day);
+  }
+}
+
+/**
+ * The shift on the floor in the shop's time zone: the latest one that has started (today's once its
+ * start has passed, yesterday's before that). A shift whose end is not after its start ends the next
+ * day. Its "now" is never cut off at the end, so overtime and early-morning work before the next
+ * start still count towards the shift they follow; nothing done on the floor goes missing from the board.
+ */
+export function shiftWindow(now: Date, timeZone: string, shiftStart: string, shiftEnd: string): FloorShift {
+  checkTimeZone(timeZone);
+  const start = parseClock(shiftStart);
+  const end = parseClock(shiftEnd);
+  const today = new TZDate(now.getTime(), timeZone);
+  const shiftFrom = (dayOffset: number) => {
+    const [y, m, d] = [today.getFullYear(), today.getMonth(), today.getDate() + dayOffset];
+    const startAt = wallClock(y, m, d, start.hours, start.minutes, start.seconds, timeZone);
+    let endAt = wallClock(y, m, d, end.hours, end.minutes, end.seconds, timeZone);
+    if (endAt.getTime() <= startAt.getTime()) endAt = wallClock(y, m, d + 1, end.hours, end.minutes, end.seconds, timeZone);
+    return { startAt, endAt };
+  };
+  const todays = shiftFrom(0);
+  const shift = todays.startAt.getTime() <= now.getTime() ? todays : shiftFrom(-1);
+  return { startAt: shift.startAt.toISOString(), endAt: shift.endAt.toISOString(), now: now.toISOString() };
+}
+
+function wallClock(year: number, month: number, date: number, hours: number, minutes: number, seconds: number, timeZone: string): Date {
+  // TZDate rolls over day and month overflow (date + 1 on the 31st) the way Date does.
+  return new Date(new TZDate(year, month, date, hours, minutes, seconds, timeZone).getTime());
+}
+
+function parseDay(day: string): { year: number; month: number; date: number } {
+  const match = DAY.exec(day);
+  if (!match || !isRealDay(day)) throw new RangeError(`"${day}" is not a calendar date: write it as YYYY-MM-DD, e.g. 2026-03-29.`);
+  return { year: Number(match[1]), month: Number(match[2]) - 1, date: Number(match[3]) };
+}
+
+/** Whether 'YYYY-MM-DD' names a day that exists (no 30 February). */
+export function isRealDay(day: string): boolean {
+  const match = DAY.exec(day);
+  if (!match) return false;
+  const utc = new Date(Date.UTC(Number(match[1]), Number(match[2]) - 1, Number(match[3])));
+  return utc.toISOString().slice(0, 10) === day;
+}
+
+const pad = (n: number) => String(n).padStart(2, '0');
