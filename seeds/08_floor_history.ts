@@ -1,24 +1,40 @@
 import { randomUUID } from 'node:crypto';
 import type { Knex } from 'knex';
 import { stageOf } from '../src/shared/events/bag-progress';
+import { shiftWindow } from '../src/shared/floor/shift-window';
 import type { EventKind, StationKind } from '../src/shared/names';
 
 const MINUTE_MS = 60 * 1000;
 const HOUR_MS = 60 * MINUTE_MS;
 
 /** Pieces spoiled on a demo bag; seeds/05_orders.ts already counts their remakes in the bag's done pieces. */
-const SPOILS: { bag: string; stage: StationKind; reason: string; quantity: number; note: string; minutesAgo: number }[] = [
-  { bag: '1043-A', stage: 'press', reason: 'Film lifted after peel', quantity: 2, note: 'Edges of the 5K lettering lifted on two tees.', minutesAgo: 70 },
-  { bag: '1042-A', stage: 'weed', reason: 'Torn while weeding', quantity: 1, note: '', minutesAgo: 95 },
-  { bag: '1041-A', stage: 'cut', reason: 'Cut incomplete', quantity: 1, note: 'Blade skipped on the number 7.', minutesAgo: 150 },
+const SPOILS: { bag: string; stage: StationKind; reason: string; quantity: number; note: string; minutesBeforeEnd: number }[] = [
+  { bag: '1043-A', stage: 'press', reason: 'Film lifted after peel', quantity: 2, note: 'Edges of the 5K lettering lifted on two tees.', minutesBeforeEnd: 70 },
+  { bag: '1042-A', stage: 'weed', reason: 'Torn while weeding', quantity: 1, note: '', minutesBeforeEnd: 95 },
+  { bag: '1041-A', stage: 'cut', reason: 'Cut incomplete', quantity: 1, note: 'Blade skipped on the number 7.', minutesBeforeEnd: 150 },
 ];
 
 const DONE_KIND: Record<StationKind, EventKind> = { cut: 'cut_done', weed: 'weed_done', press: 'press_done', pack: 'pack_done' };
 const COUNT_COLUMN = { cut: 'qty_cut', weed: 'qty_weeded', press: 'qty_pressed', pack: 'qty_packed' } as const;
 
-/** When a bag's work happened: open orders this morning, ready ones the day before. */
-function workWindow(status: string, now: number): { from: number; to: number } {
-  return status === 'open' ? { from: now - 3 * HOUR_MS, to: now - 5 * MINUTE_MS } : { from: now - 27 * HOUR_MS, to: now - 24 * HOUR_MS };
+/** A span of epoch milliseconds. */
+interface Span {
+  from: number;
+  to: number;
+}
+
+/**
+ * The last three working hours before now inside the shop's shift (the one running, or the last one
+ * if it has ended or has barely begun), and the shift before that for orders already ready, so the
+ * board opens on a shift with work in it whatever time the demo is seeded.
+ */
+function workWindows(now: number, zone: string, start: string, end: string): { open: Span; ready: Span } {
+  let shift = shiftWindow(new Date(now), zone, start, end);
+  const endOf = (s: { endAt: string }) => Math.min(now, Date.parse(s.endAt)) - 5 * MINUTE_MS;
+  if (endOf(shift) - Date.parse(shift.startAt) < HOUR_MS) shift = shiftWindow(new Date(Date.parse(shift.startAt) - 1), zone, start, end);
+  const before = shiftWindow(new Date(Date.parse(shift.startAt) - 1), zone, start, end);
+  const span = (s: { startAt: string; endAt: string }) => ({ from: Math.max(Date.parse(s.startAt), endOf(s) - 3 * HOUR_MS), to: endOf(s) });
+  return { open: span(shift), ready: span(before) };
 }
 
 /** Splits pieces into batches of about six, as an operator reports them. */
@@ -31,10 +47,12 @@ function batches(pieces: number): number[] {
 /**
  * Station events behind the demo bags' counts, so the floor board and reports have a shift to show:
  * every good piece a bag has passed becomes a done event at a station of that kind, stage after stage
- * across the bag's work window, and a few spoils (with their remakes) give the spoil ranking something to rank.
+ * across the bag's work window (the last working hours of the shift), and a few spoils (with their remakes) give the spoil ranking something to rank.
  */
 export async function seed(knex: Knex): Promise<void> {
   const now = Date.now();
+  const shop = (await knex('shop_settings').first('time_zone', 'shift_start', 'shift_end'))!;
+  const windows = workWindows(now, shop.time_zone, shop.shift_start, shop.shift_end);
   const stations = await knex('stations').select('id', 'kind').orderBy('id');
   const operators = (await knex('users').where({ role: 'operator', active: true }).orderBy('id').pluck('id')) as number[];
   const reasons = new Map((await knex('spoil_reasons').select('id', 'label')).map((r) => [r.label as string, r.id as number]));
@@ -46,7 +64,7 @@ export async function seed(knex: Knex): Promise<void> {
     return ofKind[n % ofKind.length]!.id as number;
   };
   for (const [b, bag] of bags.entries()) {
-    const window = workWindow(bag.order_status, now);
+    const window = bag.order_status === 'open' ? windows.open : windows.ready;
     (['cut', 'weed', 'press', 'pack'] as StationKind[]).forEach((kind, k) => {
       const parts = batches(bag[COUNT_COLUMN[kind]] as number);
       parts.forEach((quantity, i) => {
@@ -70,7 +88,7 @@ export async function seed(knex: Knex): Promise<void> {
 
   for (const spoil of SPOILS) {
     const bag = bags.find((row) => row.code === spoil.bag)!;
-    const at = new Date(now - spoil.minutesAgo * MINUTE_MS);
+    const at = new Date(Math.max(windows.open.from, windows.open.to - spoil.minutesBeforeEnd * MINUTE_MS));
     const id = randomUUID();
     const reasonId = reasons.get(spoil.reason)!;
     await knex('events').insert({

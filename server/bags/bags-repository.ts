@@ -1,4 +1,12 @@
+import { noSpoils } from '../../src/shared/events/bag-progress';
+import type { StationKind } from '../../src/shared/names';
 import type { BagRow, Db } from '../db/tables';
+
+/** Pieces spoiled on a bag, by the stage they were spoiled at. */
+export type SpoiledAt = Record<StationKind, number>;
+
+/** Pieces spoiled per stage for each bag asked about; a bag with no spoils has zeros. */
+export type SpoiledAtByBag = ReadonlyMap<number, SpoiledAt>;
 
 /** A bag about to be stored, with the roster lines (by id) that go in it. */
 export interface NewBag {
@@ -22,6 +30,20 @@ export class BagsRepository {
   async defaultMaxPieces(): Promise<number> {
     const settings = await this.db('shop_settings').first('bag_max_pieces');
     return settings?.bag_max_pieces ?? 24;
+  }
+
+  /** Pieces spoiled per bag and stage over each bag's whole life, in one grouped query. */
+  async spoiledAtByBag(bagIds: readonly number[]): Promise<SpoiledAtByBag> {
+    const out = new Map<number, SpoiledAt>(bagIds.map((id) => [id, noSpoils()]));
+    if (bagIds.length === 0) return out;
+    const rows = (await this.db('spoils').whereIn('bag_id', [...new Set(bagIds)]).groupBy('bag_id', 'stage').select('bag_id', 'stage').sum({ pieces: 'quantity' })) as {
+      bag_id: number;
+      stage: StationKind;
+      pieces: string | number;
+    }[];
+    // MariaDB answers SUM over an integer column as a DECIMAL, which mysql2 hands over as a string.
+    for (const row of rows) out.get(row.bag_id)![row.stage] = Number(row.pieces);
+    return out;
   }
 
   /** One bag by its token. */

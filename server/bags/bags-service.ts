@@ -52,7 +52,9 @@ export class BagsService {
       }));
     };
     try {
-      return (await this.bags.replaceQueuedBags(order.id, jobId, makeBags)).map(toBagSummary);
+      const bags = await this.bags.replaceQueuedBags(order.id, jobId, makeBags);
+      const spoiledAt = await this.bags.spoiledAtByBag(bags.map((bag) => bag.id));
+      return bags.map((bag) => toBagSummary(bag, spoiledAt));
     } catch (err) {
       if (err instanceof BagsAlreadyStartedError) {
         throw conflict('A bag of this job is already on the floor (cut or later), so the job cannot be split again.');
@@ -66,11 +68,15 @@ export class BagsService {
     if (!isBagTokenShape(token)) throw badRequest('That is not a bag code from a Dwell label (43 letters, digits, - and _). Scan the label again or type the code.');
     const bag = await this.bags.byToken(token);
     if (!bag) throw notFound('No bag has this code. The label may be from a bag that was split again: ask the lead for a fresh label.');
-    const [order, [record]] = await Promise.all([this.orders.find(bag.order_id), this.jobs.records({ jobIds: [bag.job_id] })]);
+    const [order, [record], spoiledAt] = await Promise.all([
+      this.orders.find(bag.order_id),
+      this.jobs.records({ jobIds: [bag.job_id] }),
+      this.bags.spoiledAtByBag([bag.id]),
+    ]);
     const customerName = await this.orders.customerName(order!.customer_id);
     const { rosterLines, ...job } = toJobDetail(record!);
     return {
-      bag: toBagSummary(bag),
+      bag: toBagSummary(bag, spoiledAt),
       order: { id: order!.id, code: order!.code, dueAt: order!.due_at.toISOString(), customerName },
       job,
       rosterLines: record!.rosterLines.filter((line) => line.bag_id === bag.id).map(toRosterLine),

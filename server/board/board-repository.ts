@@ -19,13 +19,6 @@ export interface ShiftEventRow {
 /** A bag on the board, with its order's status. */
 export type BoardBagRow = Pick<BagRow, 'id' | 'order_id' | 'code' | 'stage' | 'pieces' | 'qty_cut' | 'qty_weeded' | 'qty_pressed' | 'qty_packed' | 'created_at'>;
 
-/** Pieces spoiled on one bag at one stage, over the bag's whole life. */
-export interface BagSpoilRow {
-  bag_id: number;
-  stage: StationKind;
-  pieces: number;
-}
-
 /** An open order with its customer's name. */
 export interface OpenOrderRow {
   id: number;
@@ -98,13 +91,6 @@ export class BoardRepository {
       .where('orders.status', 'open')
       .orWhereIn('bags.id', (sub: Knex.QueryBuilder) => sub.from('events').where('kind', 'pack_done').whereBetween('server_at', [from, to]).select('bag_id'))
       .select('bags.id', 'bags.order_id', 'bags.code', 'bags.stage', 'bags.pieces', 'bags.qty_cut', 'bags.qty_weeded', 'bags.qty_pressed', 'bags.qty_packed', 'bags.created_at')) as BoardBagRow[];
-  }
-
-  /** Pieces spoiled per bag and stage, for the given bags. */
-  async spoilsOfBags(bagIds: number[]): Promise<BagSpoilRow[]> {
-    if (bagIds.length === 0) return [];
-    const rows = (await this.db('spoils').whereIn('bag_id', bagIds).groupBy('bag_id', 'stage').select('bag_id', 'stage').sum({ pieces: 'quantity' })) as { bag_id: number; stage: StationKind; pieces: string | number }[];
-    return rows.map((row) => ({ ...row, pieces: Number(row.pieces) }));
   }
 
   /** Open orders, soonest due first, with the customer's name. */

@@ -1,30 +1,33 @@
 import { BOARD_ONLINE_SECONDS, type BoardFlag, type BoardHourly, type BoardLowRoll, type BoardOrder, type BoardReply, type BoardStation } from '../../src/shared/board-contract';
+import { noSpoils } from '../../src/shared/events/bag-progress';
 import { DONE_WORK } from '../../src/shared/floor/bag-counts';
 import { floorNumbers, type FloorNumbers } from '../../src/shared/floor/floor-numbers';
 import { HOUR_MS, type FloorBag, type FloorEvent, type FloorShift } from '../../src/shared/floor/floor-types';
-import { shiftWindow } from '../../src/shared/floor/shift-window';
-import type { StationKind } from '../../src/shared/names';
+import { nextShift, shiftWindow } from '../../src/shared/floor/shift-window';
+import { shiftWorkingHours, type AddWorkingHours } from '../../src/shared/floor/working-time';
+import { BagsRepository, type SpoiledAtByBag } from '../bags/bags-repository';
 import type { Db, ShopSettingsRow, StationRow } from '../db/tables';
 import { HttpError } from '../http/http-error';
 import type { RollWithFilm } from '../rolls/roll-view';
-import { BoardRepository, type BagSpoilRow, type BoardBagRow, type FlagRow, type OpenOrderRow, type ShiftEventRow } from './board-repository';
+import { BoardRepository, type BoardBagRow, type FlagRow, type OpenOrderRow, type ShiftEventRow } from './board-repository';
 
 /** Millimetres in an inch, exactly (international inch, 1959). */
 const MM_PER_INCH = 25.4;
-const NO_SPOILS: Record<StationKind, number> = { cut: 0, weed: 0, press: 0, pack: 0 };
 
 /** The floor board: this shift's numbers from the stored events, bags, orders, rolls and stations. */
 export class BoardService {
   private readonly repository: BoardRepository;
+  private readonly bags: BagsRepository;
 
   constructor(db: Db) {
     this.repository = new BoardRepository(db);
+    this.bags = new BagsRepository(db);
   }
 
   /** The board as it stands at `now`. */
   async board(now = new Date()): Promise<BoardReply> {
     const settings = await this.repository.settings();
-    const shift = shopShift(now, settings);
+    const { shift, planShift, addWorkingHours } = shopTime(now, settings);
     // The numbers need only this shift's events: rates, yield, spoils and the hourly chart are about the shift,
     // and each bag's counts (for work in progress and ETAs) are kept on the bag itself, not replayed from events.
     const from = new Date(shift.startAt);
@@ -37,7 +40,7 @@ export class BoardService {
       this.repository.lowRolls(),
       this.repository.overCountFlags(),
     ]);
-    const bagSpoils = await this.repository.spoilsOfBags(bagRows.map((bag) => bag.id));
+    const bagSpoils = await this.bags.spoiledAtByBag(bagRows.map((bag) => bag.id));
 
     const floorEvents = events.map(toFloorEvent);
     const numbers = floorNumbers({
@@ -48,6 +51,8 @@ export class BoardService {
       spoils: spoilsOf(events),
       shift,
       standardPiecesPerHour: settings.standard_pieces_per_hour,
+      addWorkingHours,
+      planShift,
     });
 
     return {
@@ -68,9 +73,16 @@ export class BoardService {
   }
 }
 
-function shopShift(now: Date, settings: ShopSettingsRow): FloorShift {
+/** The shift on the floor, the shift takt plans for (the next one once it has ended), and the shop's working hours. */
+function shopTime(now: Date, settings: ShopSettingsRow): { shift: FloorShift; planShift: FloorShift; addWorkingHours: AddWorkingHours } {
+  const { time_zone: zone, shift_start: start, shift_end: end } = settings;
   try {
-    return shiftWindow(now, settings.time_zone, settings.shift_start, settings.shift_end);
+    const shift = shiftWindow(now, zone, start, end);
+    return {
+      shift,
+      planShift: now.getTime() < Date.parse(shift.endAt) ? shift : nextShift(now, zone, start, end),
+      addWorkingHours: shiftWorkingHours(zone, start, end),
+    };
   } catch (error) {
     if (!(error instanceof RangeError)) throw error;
     throw new HttpError(500, `The shop settings cannot place today's shift: ${error.message} The owner can correct it in the shop settings.`);
@@ -89,15 +101,13 @@ function toFloorEvent(row: ShiftEventRow): FloorEvent {
   };
 }
 
-function toFloorBags(rows: BoardBagRow[], spoils: BagSpoilRow[]): FloorBag[] {
-  const spoiledAt = new Map<number, Record<StationKind, number>>();
-  for (const spoil of spoils) spoiledAt.set(spoil.bag_id, { ...(spoiledAt.get(spoil.bag_id) ?? NO_SPOILS), [spoil.stage]: spoil.pieces });
+function toFloorBags(rows: BoardBagRow[], spoiledAt: SpoiledAtByBag): FloorBag[] {
   return rows.map((bag) => ({
     id: bag.id,
     orderId: bag.order_id,
     stage: bag.stage,
     pieces: bag.pieces,
-    counts: { cut: bag.qty_cut, weeded: bag.qty_weeded, pressed: bag.qty_pressed, packed: bag.qty_packed, spoiledAt: spoiledAt.get(bag.id) ?? NO_SPOILS },
+    counts: { cut: bag.qty_cut, weeded: bag.qty_weeded, pressed: bag.qty_pressed, packed: bag.qty_packed, spoiledAt: spoiledAt.get(bag.id) ?? noSpoils() },
     queuedAt: bag.created_at.toISOString(),
   }));
 }

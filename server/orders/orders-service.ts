@@ -60,6 +60,7 @@ export class OrdersService {
     const order = await this.orders.find(id);
     if (!order) throw notFound(`There is no order ${id}. Go back to Orders and pick one from the list.`);
     const [customer, jobs, bags] = await Promise.all([this.customers.find(order.customer_id), this.jobs.records({ orderId: id }), this.bags.forOrder(id)]);
+    const spoiledAt = await this.bags.spoiledAtByBag(bags.map((bag) => bag.id));
     return {
       id: order.id,
       code: order.code,
@@ -68,7 +69,7 @@ export class OrdersService {
       status: order.status,
       notes: order.notes,
       jobs: jobs.map(toJobDetail),
-      bags: bags.map(toBagSummary),
+      bags: bags.map((bag) => toBagSummary(bag, spoiledAt)),
     };
   }
 

@@ -3,6 +3,7 @@ import type { BagTicket } from '../../src/shared/intake-contract';
 import type { StationKind } from '../../src/shared/names';
 import type { Principal } from '../auth/principal';
 import { toBagSummary } from '../bags/bag-view';
+import { BagsRepository } from '../bags/bags-repository';
 import { BagsService } from '../bags/bags-service';
 import type { Db, StationRow } from '../db/tables';
 import { HttpError, notFound } from '../http/http-error';
@@ -28,12 +29,14 @@ export class TicketsService {
   private readonly tickets: TicketsRepository;
   private readonly jobs: JobsRepository;
   private readonly bags: BagsService;
+  private readonly bagRows: BagsRepository;
   private readonly cards: PressCardService;
 
   constructor(db: Db) {
     this.tickets = new TicketsRepository(db);
     this.jobs = new JobsRepository(db);
     this.bags = new BagsService(db);
+    this.bagRows = new BagsRepository(db);
     this.cards = new PressCardService(new PressRepository(db));
   }
 
@@ -64,9 +67,10 @@ export class TicketsService {
 
   private async stationTickets(bags: VersionedBag[], station: StationRow): Promise<StationTicket[]> {
     if (bags.length === 0) return [];
-    const [records, orders] = await Promise.all([
+    const [records, orders, spoiledAt] = await Promise.all([
       this.jobs.records({ jobIds: [...new Set(bags.map((bag) => bag.job_id))] }),
       this.tickets.orders([...new Set(bags.map((bag) => bag.order_id))]),
+      this.bagRows.spoiledAtByBag(bags.map((bag) => bag.id)),
     ]);
     const recordByJob = new Map(records.map((record) => [record.job.id, record]));
     const orderById = new Map(orders.map((order) => [order.id, order]));
@@ -76,7 +80,7 @@ export class TicketsService {
       const order = orderById.get(bag.order_id)!;
       const { rosterLines, ...job } = toJobDetail(record);
       const ticket: BagTicket = {
-        bag: toBagSummary(bag),
+        bag: toBagSummary(bag, spoiledAt),
         order: { id: order.id, code: order.code, dueAt: order.due_at.toISOString(), customerName: order.customer_name },
         job,
         rosterLines: rosterLines.filter((line) => line.bagId === bag.id),

@@ -130,7 +130,8 @@ export interface BagSummary {
   stage: BagStage;
   sizes: SizeQuantities;
   pieces: number;
-  counts: { cut: number; weeded: number; pressed: number; packed: number; spoiled: number };
+  /** Good pieces out of each stage; `spoiled` is the total of `spoiledAt`, the pieces spoiled by the stage they were spoiled at. */
+  counts: { cut: number; weeded: number; pressed: number; packed: number; spoiled: number; spoiledAt: Record<StationKind, number> };
   remakeCount: number;
   overCount: boolean;
 }

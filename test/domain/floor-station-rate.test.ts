@@ -19,6 +19,17 @@ describe('pieces per hour per station', () => {
     const [rate] = stationRates(cutter, [e('cut_done', 20, '06:20'), e('cut_done', 7, '05:50')], { startAt: '2026-03-02T06:00:00Z', endAt: '2026-03-02T14:30:00Z', now: '2026-03-02T06:30:00Z' });
     expect(rate.rollingHourPiecesPerHour).toBe(40);
   });
+
+  it('does not thin the shift rate with the hours after the shift ended, but counts overtime', () => {
+    // Worked by hand: shift 06:00-14:30 (8.5 h), 85 pieces in it, looked at at 20:00: 85 / 8.5 h = 10/h, not 85 / 14 h.
+    const shift = { startAt: '2026-03-02T06:00:00Z', endAt: '2026-03-02T14:30:00Z', now: '2026-03-02T20:00:00Z' };
+    const inShift = [e('cut_done', 40, '09:00'), e('cut_done', 45, '14:00')];
+    expect(stationRates(cutter, inShift, shift)[0]).toMatchObject({ shiftPieces: 85, shiftPiecesPerHour: 10, rollingHourPieces: 0 });
+    // 15 more in overtime up to 16:30: 100 pieces over 10.5 h.
+    const [overtime] = stationRates(cutter, [...inShift, e('cut_done', 15, '16:30')], shift);
+    expect(overtime.shiftPieces).toBe(100);
+    expect(overtime.shiftPiecesPerHour).toBeCloseTo(100 / 10.5, 10);
+  });
 });
 
 describe('work in progress', () => {

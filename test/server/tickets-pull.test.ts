@@ -65,6 +65,35 @@ describe('pulling station tickets', () => {
     expect(asLead.body).toMatchObject({ bag: { id: bag.id }, pressCard: null, pressCardProblem: null });
   });
 
+  it('carries the pieces spoiled at each stage on the pulled ticket, the scanned ticket and the order detail', async () => {
+    const press = await operatorOn(hub.url, hub.db, 'Press 2', 2);
+    const pack = await operatorOn(hub.url, hub.db, 'Pack 1', 3);
+    const since = ((await pull(pack.cookie, 0).expect(200)).body as TicketsReply).version;
+    const reason = (await hub.db('spoil_reasons').where({ active: true }).first())!;
+    const bag = await freshBag(hub.db, 4);
+    const clean = await freshBag(hub.db, 2);
+    await hub.db('bags').where({ id: bag.id }).update({ qty_cut: 4, qty_weeded: 4 });
+    const atPress = { bagId: bag.id, stationId: press.stationId, userId: press.userId };
+    const atPack = { bagId: bag.id, stationId: pack.stationId, userId: pack.userId };
+    const spoil = (at: typeof atPress, stage: string) => stationEvent(at, 'spoil', 1, { stage, reasonId: reason.id, note: '', hasPhoto: false });
+    // Two spoil events at the press (1 + 1) are summed; the one at the pack bench is kept apart from them.
+    const pressed = await push(press.cookie, [stationEvent(atPress, 'press_done', 2), spoil(atPress, 'press'), spoil(atPress, 'press')]).expect(200);
+    expect(pressed.body.rejected).toEqual([]);
+    expect((await push(pack.cookie, [spoil(atPack, 'pack')]).expect(200)).body.rejected).toEqual([]);
+    const expected = { spoiled: 3, spoiledAt: { cut: 0, weed: 0, press: 2, pack: 1 } };
+
+    const pulled = ((await pull(pack.cookie, since).expect(200)).body as TicketsReply).tickets.find((t) => t.bag.id === bag.id);
+    expect(pulled!.bag.counts).toMatchObject(expected);
+    const scanned = await request(hub.url).get(`/api/tickets/by-token/${bag.token}`).set('Cookie', pack.cookie).expect(200);
+    expect(scanned.body.bag.counts).toMatchObject(expected);
+    const orderId = (await hub.db('bags').where({ id: bag.id }).first('order_id'))!.order_id;
+    const order = await request(hub.url).get(`/api/orders/${orderId}`).set('Cookie', await leadCookie(hub.url)).expect(200);
+    const inOrder = (id: number) => (order.body.bags as { id: number; counts: object }[]).find((b) => b.id === id)!.counts;
+    expect(inOrder(bag.id)).toMatchObject(expected);
+    // A bag with no spoils answers zeros at every stage, not a missing field.
+    expect(inOrder(clean.id)).toMatchObject({ spoiled: 0, spoiledAt: { cut: 0, weed: 0, press: 0, pack: 0 } });
+  });
+
   it('refuses a since that is not a whole number with a sentence', async () => {
     const press = await operatorOn(hub.url, hub.db, 'Press 1', 1);
     const res = await pull(press.cookie, 'soon' as never).expect(400);

@@ -22,7 +22,7 @@ function bag(id: number, code: string, token: string): BagSummary {
     stage: 'queued',
     sizes: { M: 10, L: 14 },
     pieces: 24,
-    counts: { cut: 0, weeded: 0, pressed: 0, packed: 0, spoiled: 0 },
+    counts: { cut: 0, weeded: 0, pressed: 0, packed: 0, spoiled: 0, spoiledAt: { cut: 0, weed: 0, press: 0, pack: 0 } },
     remakeCount: 0,
     overCount: false,
   };

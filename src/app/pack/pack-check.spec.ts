@@ -6,18 +6,21 @@ import { provideHttpClientTesting } from '@angular/common/http/testing';
 import { provideRouter } from '@angular/router';
 import { MatIconTestingModule } from '@angular/material/icon/testing';
 import type { StationTicket } from '../../shared/events-contract';
+import type { StationKind } from '../../shared/names';
 import { Session } from '../auth/session';
 import { STATION_DB, type StationDb } from '../sync/station-db';
 import { SyncService } from '../sync/sync-service';
 import { cacheTicket, freshStationDb, operatorSession, plainTicket, until } from '../sync/station-testing';
 import { PackCheck } from './pack-check';
 
-/** A bag of 2 S and 3 M with every piece pressed, unless the counts say otherwise. */
-function pressedTicket(counts: Partial<StationTicket['bag']['counts']> = {}): StationTicket {
+/** A bag of 2 S and 3 M with every piece pressed, unless the counts say otherwise; spoils are per stage. */
+function pressedTicket(counts: { pressed?: number; packed?: number } = {}, spoiledAt: Partial<Record<StationKind, number>> = {}): StationTicket {
   const ticket = plainTicket(1, { S: 2, M: 3 }, 5);
   ticket.bag.stage = 'pressed';
-  ticket.bag.counts = { ...ticket.bag.counts, pressed: 5, ...counts };
-  ticket.bag.remakeCount = ticket.bag.counts.spoiled;
+  const perStage = { ...ticket.bag.counts.spoiledAt, ...spoiledAt };
+  const spoiled = Object.values(perStage).reduce((a, b) => a + b, 0);
+  ticket.bag.counts = { ...ticket.bag.counts, pressed: 5, ...counts, spoiled, spoiledAt: perStage };
+  ticket.bag.remakeCount = spoiled;
   return ticket;
 }
 
@@ -121,7 +124,7 @@ describe('PackCheck', () => {
 
   it('calls out remakes still owed and packs part of the bag only after a confirmation', async () => {
     // 2 pieces spoiled at the press and not pressed again: 3 good pressed pieces of 5.
-    await open(pressedTicket({ pressed: 3, spoiled: 2 }));
+    await open(pressedTicket({ pressed: 3 }, { press: 2 }));
 
     expect(byTestId('pack-remakes')!.textContent).toContain('2 remakes still to come from the press.');
     click('pack-tick-all');
@@ -147,6 +150,19 @@ describe('PackCheck', () => {
 
     const rows = await db.outbox.toArray();
     expect(rows.map((row) => [row.kind, row.quantity, row.payload])).toEqual([['pack_done', 2, { sizes: { S: 2 } }]]);
+  });
+
+  it('calls out the remake of a piece spoiled at the pack bench on another tablet, with nothing in this outbox', async () => {
+    // 5 pressed, 1 spoiled while packing on another tablet: the press owes 6, so 1 remake; 4 ready to pack.
+    await open(pressedTicket({}, { pack: 1 }));
+
+    expect(await db.outbox.count()).toBe(0);
+    expect(byTestId('pack-remakes')!.textContent).toContain('1 remake still to come from the press.');
+    click('pack-tick-all');
+    await settle(() => byTestId('pack-counted')?.textContent === '5');
+    click('pack-mark');
+    await settle(() => !!byTestId('pack-confirm'));
+    expect(byTestId('pack-confirm')!.textContent).toContain('Only 4 pieces are recorded as pressed and not yet packed.');
   });
 
   it('shows one tile per roster line and sends the ticked names as their sizes', async () => {

@@ -44,7 +44,7 @@ export class PackCheck {
   });
   protected readonly progress = computed(() => {
     const ticket = this.ticket();
-    return ticket ? packProgress(ticket.bag, this.packHistory()) : null;
+    return ticket ? packProgress(ticket.bag) : null;
   });
 
   /** Garments counted into the bag now, by line key; starts empty for each bag. */

@@ -5,7 +5,7 @@ import type { StationEvent } from '../../shared/events-contract';
 import { type OutboxRow, STATION_DB } from '../sync/station-db';
 import type { LocalPackHistory } from './pack-lines';
 
-/** What this tablet packed and spoiled at the pack bench on a bag, read from its own outbox. */
+/** What this tablet packed at the pack bench on a bag, by size, read from its own outbox. */
 @Injectable({ providedIn: 'root' })
 export class PackHistory {
   private readonly db = inject(STATION_DB);
@@ -19,13 +19,9 @@ export class PackHistory {
 
 function historyOf(rows: OutboxRow[]): LocalPackHistory {
   const packedBySize: Record<string, number> = {};
-  let packSpoils = 0;
   for (const row of rows) {
-    if (row.kind === 'pack_done') {
-      for (const [size, n] of Object.entries((row as StationEvent<'pack_done'>).payload.sizes ?? {})) packedBySize[size] = (packedBySize[size] ?? 0) + (n ?? 0);
-    } else if (row.kind === 'spoil' && (row as StationEvent<'spoil'>).payload.stage === 'pack') {
-      packSpoils += row.quantity;
-    }
+    if (row.kind !== 'pack_done') continue;
+    for (const [size, n] of Object.entries((row as StationEvent<'pack_done'>).payload.sizes ?? {})) packedBySize[size] = (packedBySize[size] ?? 0) + (n ?? 0);
   }
-  return { packedBySize, packSpoils };
+  return { packedBySize };
 }

@@ -1,4 +1,4 @@
-import { owedAt, type BagCounts } from '../../shared/events/bag-progress';
+import { owedAt, ROUTE, type BagCounts } from '../../shared/events/bag-progress';
 import { SIZES, type BagSummary, type SizeQuantities } from '../../shared/intake-contract';
 import type { TicketRow } from '../sync/station-db';
 
@@ -6,8 +6,6 @@ import type { TicketRow } from '../sync/station-db';
 export interface LocalPackHistory {
   /** Pieces this tablet marked packed, by size. */
   packedBySize: SizeQuantities;
-  /** Pieces this tablet reported spoiled at the pack stage. */
-  packSpoils: number;
 }
 
 /** One line of the Pack check list: a size of a plain job, or one roster line of a personalised job. */
@@ -40,24 +38,23 @@ export interface PackProgress {
 }
 
 /** Nothing recorded here yet. */
-export const NO_PACK_HISTORY: LocalPackHistory = { packedBySize: {}, packSpoils: 0 };
+export const NO_PACK_HISTORY: LocalPackHistory = { packedBySize: {} };
 
 /**
- * The bag's numbers for the pack bench, by the shared counting rules. The ticket counts spoils in
- * one total; spoils at the pack stage are known only from this tablet, so every other spoil is
- * taken as one from before the press, whose remake the press still has to deliver.
+ * The bag's numbers for the pack bench, by the shared counting rules, from the ticket's spoils per
+ * stage (the hub's, plus this tablet's events not yet acknowledged), wherever they were logged.
  */
-export function packProgress(bag: BagSummary, history: LocalPackHistory = NO_PACK_HISTORY): PackProgress {
-  const spoiled = bag.counts.spoiled;
-  const atPack = Math.min(history.packSpoils, spoiled);
+export function packProgress(bag: BagSummary): PackProgress {
+  const { spoiledAt } = bag.counts;
   const counts: BagCounts = {
     pieces: bag.pieces,
     cut: bag.counts.cut,
     weeded: bag.counts.weeded,
     pressed: bag.counts.pressed,
     packed: bag.counts.packed,
-    spoiledAt: { cut: 0, weed: 0, press: spoiled - atPack, pack: atPack },
+    spoiledAt,
   };
+  const spoiled = ROUTE.reduce((sum, stage) => sum + spoiledAt[stage], 0);
   const stillToPress = Math.max(0, owedAt(counts, 'press') - counts.pressed);
   // A shortfall at the press is put down to remakes first: those are the pieces the bench is waiting on.
   const remakesOwed = Math.min(spoiled, stillToPress);
@@ -66,7 +63,8 @@ export function packProgress(bag: BagSummary, history: LocalPackHistory = NO_PAC
     pressed: counts.pressed,
     packed: counts.packed,
     toPack: Math.max(0, owedAt(counts, 'pack') - counts.packed),
-    readyToPack: Math.max(0, counts.pressed - atPack - counts.packed),
+    // A piece spoiled at the pack bench was pressed but can never go in the bag.
+    readyToPack: Math.max(0, counts.pressed - spoiledAt.pack - counts.packed),
     remakesOwed,
     notPressed: stillToPress - remakesOwed,
   };

@@ -64,11 +64,22 @@ export class StationDb extends Dexie {
   constructor(name = 'dwell-station') {
     super(name);
     // Indexes only for what is queried: scan look-ups, pulls by version, the drain order, counts and pruning.
-    this.version(1).stores({
+    const stores = {
       tickets: 'bagId, token, code, version',
       outbox: 'id, seq, state, [state+seq], ackedAt',
       photos: 'eventId, state',
       meta: 'name',
+    };
+    this.version(1).stores(stores);
+    // Version 2: a ticket's counts carry spoils per stage. A ticket cached before has only the total, so
+    // it goes to the press (a remake the press still owes, as the pack bench read it before) until the
+    // next pull, which starts from 0 and replaces every open ticket with the hub's own numbers.
+    this.version(2).stores(stores).upgrade(async (tx) => {
+      await tx.table<TicketRow, number>('tickets').toCollection().modify((row) => {
+        const counts = row.ticket.bag.counts;
+        counts.spoiledAt ??= { cut: 0, weed: 0, press: counts.spoiled, pack: 0 };
+      });
+      await tx.table<MetaRow, string>('meta').delete('lastVersion');
     });
   }
 }

@@ -75,10 +75,22 @@ describe('StationEvents', () => {
     expect(await db.outbox.count()).toBe(1);
   });
 
-  it('adds a spoil to the bag\'s spoiled and remake counts', async () => {
+  it('adds a spoil to the bag\'s spoiled and remake counts and to the spoils of its stage', async () => {
     await events.record('spoil', 1, 2, { stage: 'weed', reasonId: 5, note: '', hasPhoto: false });
     const bag = (await db.tickets.get(1))!.ticket.bag;
     expect(bag.counts.spoiled).toBe(2);
+    expect(bag.counts.spoiledAt).toEqual({ cut: 0, weed: 2, press: 0, pack: 0 });
     expect(bag.remakeCount).toBe(2);
+  });
+
+  it('takes an undone spoil back off the spoils of its stage', async () => {
+    const event = await events.recordWithUndo('spoil', 1, 3, { stage: 'press', reasonId: 5, note: '', hasPhoto: false });
+    expect((await db.tickets.get(1))!.ticket.bag.counts.spoiledAt.press).toBe(3);
+
+    expect(await events.undo(event.id)).toBe(true);
+
+    const bag = (await db.tickets.get(1))!.ticket.bag;
+    expect(bag.counts.spoiledAt).toEqual({ cut: 0, weed: 0, press: 0, pack: 0 });
+    expect(bag.counts.spoiled).toBe(0);
   });
 });

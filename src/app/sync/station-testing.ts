@@ -1,5 +1,6 @@
 import 'fake-indexeddb/auto';
 import { signal } from '@angular/core';
+import { noSpoils } from '../../shared/events/bag-progress';
 import type { BatchReply, EventBatch, StationTicket } from '../../shared/events-contract';
 import { StationDb, emptyTally } from './station-db';
 
@@ -40,7 +41,7 @@ export function plainTicket(bagId: number, sizes: Record<string, number>, weeded
     pressCardProblem: 'No press at a weed station.',
     bag: {
       id: bagId, code: `2001-${String.fromCharCode(64 + bagId)}`, token: `${'t'.repeat(42)}${bagId % 10}`, jobId: 1, stage: 'cut',
-      sizes, pieces, counts: { cut: pieces, weeded, pressed: 0, packed: 0, spoiled: 0 }, remakeCount: 0, overCount: false,
+      sizes, pieces, counts: { cut: pieces, weeded, pressed: 0, packed: 0, spoiled: 0, spoiledAt: noSpoils() }, remakeCount: 0, overCount: false,
     },
     order: { id: 1, code: '2001', dueAt: '2030-01-01T12:00:00Z', customerName: 'Fernhollow Bowls Club' },
     job: {

@@ -17,10 +17,13 @@ export function withEvent(row: TicketRow, event: StationEvent & { size?: string 
     case 'cut_done': counts.cut += q; break;
     case 'press_done': counts.pressed += q; break;
     case 'pack_done': counts.packed += q; break;
-    case 'spoil':
+    case 'spoil': {
+      const stage = (event as StationEvent<'spoil'>).payload.stage;
       counts.spoiled += q;
+      counts.spoiledAt[stage] += q;
       ticket.ticket.bag.remakeCount += q;
       break;
+    }
     case 'weed_done': {
       counts.weeded += q;
       const payload = (event as StationEvent<'weed_done'>).payload;

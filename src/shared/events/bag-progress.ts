@@ -11,6 +11,11 @@ export interface BagCounts {
   spoiledAt: Record<StationKind, number>;
 }
 
+/** Spoils per stage of a bag with none yet. */
+export function noSpoils(): Record<StationKind, number> {
+  return { cut: 0, weed: 0, press: 0, pack: 0 };
+}
+
 /** The stages of work in the order a bag meets them. */
 export const ROUTE: readonly StationKind[] = ['cut', 'weed', 'press', 'pack'];
 const STAGE_AFTER: Record<StationKind, BagStage> = { cut: 'cut', weed: 'weeded', press: 'pressed', pack: 'packed' };

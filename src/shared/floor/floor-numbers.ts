@@ -7,6 +7,7 @@ import { shiftSoFarWindow, stationRates, type StationRate } from './station-rate
 import { taktForToday, type TodayTakt } from './takt';
 import { averageHoursInStage, systemFlow, throughputByWork, type SystemFlow } from './throughput';
 import { workInProgress, type WorkInProgress } from './work-in-progress';
+import type { AddWorkingHours } from './working-time';
 
 /** Everything the floor numbers are computed from. */
 export interface FloorInput {
@@ -19,6 +20,10 @@ export interface FloorInput {
   shift: FloorShift;
   /** The shop's standard good pieces per hour at a stage, used where no rate has been observed yet. */
   standardPiecesPerHour: number;
+  /** How hours of work fall on the clock (shifts); plain clock hours when absent. */
+  addWorkingHours?: AddWorkingHours;
+  /** The shift takt time plans for, when it is not `shift` (the next one, once `shift` has ended). */
+  planShift?: FloorShift;
 }
 
 /** The floor board's numbers for the shift so far. */
@@ -37,7 +42,7 @@ export interface FloorNumbers {
 
 /** Computes the floor board's numbers; the shift-so-far throughput is the observed rate behind each ETA. */
 export function floorNumbers(input: FloorInput): FloorNumbers {
-  const soFar = shiftSoFarWindow(input.shift);
+  const soFar = shiftSoFarWindow(input.shift, input.events);
   const timelines = stageTimelines(input.bags, input.events);
   const throughput = throughputByWork(input.events, soFar);
   return {
@@ -46,9 +51,9 @@ export function floorNumbers(input: FloorInput): FloorNumbers {
     throughput,
     hoursInStage: averageHoursInStage(timelines, soFar),
     flow: systemFlow(timelines, soFar),
-    orders: orderEtas(input.orders, input.bags, throughput, input.standardPiecesPerHour, soFar.toMs),
+    orders: orderEtas(input.orders, input.bags, throughput, input.standardPiecesPerHour, Date.parse(input.shift.now), input.addWorkingHours),
     yield: floorYieldFromEvents(input.events, soFar),
     spoilReasons: spoilPareto(input.spoils),
-    takt: taktForToday(input.shift, input.orders, input.bags),
+    takt: taktForToday(input.planShift ?? input.shift, input.orders, input.bags),
   };
 }

@@ -1,6 +1,7 @@
 import type { StationKind } from '../names';
 import { remainingAt, WORK_ROUTE } from './bag-counts';
-import { HOUR_MS, type FloorBag, type FloorOrder } from './floor-types';
+import type { FloorBag, FloorOrder } from './floor-types';
+import { addClockHours, type AddWorkingHours } from './working-time';
 
 /** One order's expected finish. */
 export interface OrderEta {
@@ -14,7 +15,7 @@ export interface OrderEta {
   /** Pieces per hour used at the bottleneck, and whether it was observed or the shop's standard. */
   bottleneckRate: number | null;
   rateSource: 'observed' | 'standard' | null;
-  /** now + remaining pieces at the bottleneck / its rate (ISO 8601); null when nothing is left. */
+  /** now + remaining pieces at the bottleneck / its rate, in working hours (ISO 8601); null when nothing is left. */
   eta: string | null;
   atRisk: boolean;
 }
@@ -24,7 +25,8 @@ export interface OrderEta {
  *   rate_w  = observed good pieces per hour at w, or the shop's standard pieces per hour when none was observed;
  *   hours_w = remaining_w / rate_w.
  * The bottleneck is the w with the largest hours_w (ties go to the later stage), and
- *   ETA = now + hours_bottleneck;  at risk when ETA > due.
+ *   ETA = now + hours_bottleneck, counted in working hours (time between shifts does not work);
+ *   at risk when ETA > due.
  * The order's pieces flow through the stages together, so the slowest of them sets the finish; this
  * leaves out the time for the last pieces to pass the stages after it, and other orders sharing the stations.
  */
@@ -34,6 +36,7 @@ export function orderEtas(
   observedPiecesPerHour: Record<StationKind, number | null>,
   standardPiecesPerHour: number,
   nowMs: number,
+  addWorkingHours: AddWorkingHours = addClockHours,
 ): OrderEta[] {
   return orders.map((order) => {
     const mine = bags.filter((b) => b.orderId === order.id);
@@ -49,7 +52,7 @@ export function orderEtas(
       const r = observed !== null && observed > 0 ? observed : standardPiecesPerHour;
       if (remaining[w] / r >= hours) [bottleneck, hours, rate] = [w, remaining[w] / r, r];
     }
-    const etaMs = bottleneck ? nowMs + hours * HOUR_MS : null;
+    const etaMs = bottleneck ? addWorkingHours(nowMs, hours) : null;
     const observedAtBottleneck = bottleneck ? observedPiecesPerHour[bottleneck] : null;
     return {
       orderId: order.id,

@@ -61,19 +61,35 @@ export function localDaysBetween(from: string, to: string): string[] {
  */
 export function shiftWindow(now: Date, timeZone: string, shiftStart: string, shiftEnd: string): FloorShift {
   checkTimeZone(timeZone);
+  const today = localDate(now, timeZone);
+  const todays = shiftOnDay(today, timeZone, shiftStart, shiftEnd);
+  const shift = Date.parse(todays.startAt) <= now.getTime() ? todays : shiftOnDay(addDays(today, -1), timeZone, shiftStart, shiftEnd);
+  return { ...shift, now: now.toISOString() };
+}
+
+/** The calendar day `days` after 'YYYY-MM-DD' (calendar arithmetic in UTC: a day is a date, not 24 hours of a zone). */
+export function addDays(day: string, days: number): string {
+  return new Date(Date.parse(`${day}T00:00:00Z`) + days * 86_400_000).toISOString().slice(0, 10);
+}
+
+/** The shift that starts on a local calendar day 'YYYY-MM-DD' (ending the next day when it runs past midnight). */
+export function shiftOnDay(day: string, timeZone: string, shiftStart: string, shiftEnd: string): LocalSpan {
+  const { year, month, date } = parseDay(day);
   const start = parseClock(shiftStart);
   const end = parseClock(shiftEnd);
-  const today = new TZDate(now.getTime(), timeZone);
-  const shiftFrom = (dayOffset: number) => {
-    const [y, m, d] = [today.getFullYear(), today.getMonth(), today.getDate() + dayOffset];
-    const startAt = wallClock(y, m, d, start.hours, start.minutes, start.seconds, timeZone);
-    let endAt = wallClock(y, m, d, end.hours, end.minutes, end.seconds, timeZone);
-    if (endAt.getTime() <= startAt.getTime()) endAt = wallClock(y, m, d + 1, end.hours, end.minutes, end.seconds, timeZone);
-    return { startAt, endAt };
-  };
-  const todays = shiftFrom(0);
-  const shift = todays.startAt.getTime() <= now.getTime() ? todays : shiftFrom(-1);
-  return { startAt: shift.startAt.toISOString(), endAt: shift.endAt.toISOString(), now: now.toISOString() };
+  const startAt = wallClock(year, month, date, start.hours, start.minutes, start.seconds, timeZone);
+  let endAt = wallClock(year, month, date, end.hours, end.minutes, end.seconds, timeZone);
+  if (endAt.getTime() <= startAt.getTime()) endAt = wallClock(year, month, date + 1, end.hours, end.minutes, end.seconds, timeZone);
+  return { startAt: startAt.toISOString(), endAt: endAt.toISOString() };
+}
+
+/** The next shift to start after `now` (for planning the day ahead once the current one has ended). */
+export function nextShift(now: Date, timeZone: string, shiftStart: string, shiftEnd: string): FloorShift {
+  checkTimeZone(timeZone);
+  const today = localDate(now, timeZone);
+  const todays = shiftOnDay(today, timeZone, shiftStart, shiftEnd);
+  const shift = Date.parse(todays.startAt) > now.getTime() ? todays : shiftOnDay(addDays(today, 1), timeZone, shiftStart, shiftEnd);
+  return { ...shift, now: now.toISOString() };
 }
 
 function wallClock(year: number, month: number, date: number, hours: number, minutes: number, seconds: number, timeZone: string): Date {

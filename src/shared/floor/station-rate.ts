@@ -18,9 +18,21 @@ export function rollingHourWindow(shift: FloorShift): TimeWindow {
   return { fromMs: Math.max(now - HOUR_MS, Date.parse(shift.startAt)), toMs: now };
 }
 
-/** The shift so far: from its start to now. */
-export function shiftSoFarWindow(shift: FloorShift): TimeWindow {
-  return { fromMs: Date.parse(shift.startAt), toMs: Date.parse(shift.now) };
+/**
+ * The shift's working time so far: from its start to now while it runs. Once it has ended, to its end,
+ * or to the last piece finished after it (overtime), so the hours after everyone went home do not
+ * thin out the shift's rates and the ETAs built on them.
+ */
+export function shiftSoFarWindow(shift: FloorShift, events: readonly FloorEvent[] = []): TimeWindow {
+  const fromMs = Date.parse(shift.startAt);
+  const nowMs = Date.parse(shift.now);
+  const endMs = Date.parse(shift.endAt);
+  if (nowMs <= endMs) return { fromMs, toMs: nowMs };
+  const lastDone = events.reduce((last, e) => {
+    const at = Date.parse(e.at);
+    return DONE_WORK[e.kind] && at <= nowMs && at > last ? at : last;
+  }, endMs);
+  return { fromMs, toMs: lastDone };
 }
 
 /** Good pieces (done events only; spoils and scans are not output) matching a test within a window. */
@@ -31,7 +43,7 @@ export function donePieces(events: readonly FloorEvent[], window: TimeWindow, ma
 /** Pieces per hour for every station, rolling hour and shift so far. */
 export function stationRates(stations: readonly FloorStation[], events: readonly FloorEvent[], shift: FloorShift): StationRate[] {
   const rolling = rollingHourWindow(shift);
-  const soFar = shiftSoFarWindow(shift);
+  const soFar = shiftSoFarWindow(shift, events);
   return stations.map((station) => {
     const mine = (e: FloorEvent) => e.stationId === station.id;
     const rollingHourPieces = donePieces(events, rolling, mine);

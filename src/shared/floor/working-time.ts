@@ -1,0 +1,35 @@
+import { addDays, localDate, shiftOnDay } from './shift-window';
+import { HOUR_MS } from './floor-types';
+
+/** Adds hours of work to a time, counting only the hours inside shifts; answers epoch milliseconds. */
+export type AddWorkingHours = (fromMs: number, hours: number) => number;
+
+/** Plain clock time: every hour is a working hour. */
+export const addClockHours: AddWorkingHours = (fromMs, hours) => fromMs + hours * HOUR_MS;
+
+/** Far enough ahead for any real order; beyond it the answer is the clock time, not a hang. */
+const MAX_DAYS = 400;
+
+/**
+ * Working time for a shop that runs one shift a day, every day, from `shiftStart` to `shiftEnd` in its
+ * time zone: work left at the end of a shift carries over to the next shift's start. Days are stepped
+ * as local calendar days, so a shift on the day the clocks change keeps its wall-clock times.
+ */
+export function shiftWorkingHours(timeZone: string, shiftStart: string, shiftEnd: string): AddWorkingHours {
+  return (fromMs, hours) => {
+    let left = hours * HOUR_MS;
+    let at = fromMs;
+    // Start a day early: an overnight shift that began yesterday may still be running.
+    let day = addDays(localDate(new Date(fromMs), timeZone), -1);
+    for (let i = 0; i < MAX_DAYS; i++, day = addDays(day, 1)) {
+      const shift = shiftOnDay(day, timeZone, shiftStart, shiftEnd);
+      const endMs = Date.parse(shift.endAt);
+      if (endMs <= at) continue;
+      const begin = Math.max(at, Date.parse(shift.startAt));
+      if (left <= endMs - begin) return begin + left;
+      left -= endMs - begin;
+      at = endMs;
+    }
+    return at + left;
+  };
+}
