@@ -67,6 +67,6 @@ export function clockTime(iso: string | null): string {
   if (!iso) return 'never';
   const at = new Date(iso);
   const sameDay = at.toDateString() === new Date().toDateString();
-  const time = at.toLocaleTimeString([], { hour: '2-digit', minute: '2-digit' });
+  const time = at.toLocaleTimeString([], { hour: '2-digit', minute: '2-digit', hourCycle: 'h23' });
   return sameDay ? time : `${at.toLocaleDateString([], { day: 'numeric', month: 'short' })} ${time}`;
 }
