@@ -40,11 +40,12 @@ export function clock(iso: string | null): string {
   return iso ? format(new Date(iso), 'HH:mm') : '—';
 }
 
-/** A due time or ETA relative to `now`: "Today 16:00", "Tomorrow 09:30", or "Thu 12 Jun 16:00". */
-export function dayAndTime(iso: string | null, now: Date): string {
-  if (!iso) return '—';
+/** A due time or ETA relative to `now`, as its day ("Today", "Tomorrow", "Thu 12 Jun") and its clock time, or a dash. */
+export function dayAndTime(iso: string | null, now: Date): { day: string; time: string } {
+  if (!iso) return { day: '—', time: '' };
   const at = new Date(iso);
-  if (isSameDay(at, now)) return `Today ${format(at, 'HH:mm')}`;
-  if (isSameDay(at, addDays(now, 1))) return `Tomorrow ${format(at, 'HH:mm')}`;
-  return format(at, 'EEE d MMM HH:mm');
+  const time = format(at, 'HH:mm');
+  if (isSameDay(at, now)) return { day: 'Today', time };
+  if (isSameDay(at, addDays(now, 1))) return { day: 'Tomorrow', time };
+  return { day: format(at, 'EEE d MMM'), time };
 }

@@ -69,6 +69,38 @@ describe('BoardView', () => {
     expect(text(cutter, '[data-testid=station-rate]')).toBe('31');
   });
 
+  it('finds a station by its name and says since when an offline station was last heard from', async () => {
+    const page = await render(specBoard());
+
+    const press = page.querySelector('[data-testid=board-station][data-station-name="Spec Press"]')!;
+    expect(press.getAttribute('data-station-kind')).toBe('press');
+    expect(text(press, '.state')).toBe('Offline since 10:02');
+    expect(press.querySelector('[data-testid=station-online] mat-icon')?.getAttribute('svgIcon')).toBe('offline');
+    const cutter = page.querySelector('[data-testid=board-station][data-station-name="Spec Cutter"]')!;
+    expect(text(cutter, '.state')).toBe('Online');
+  });
+
+  it('lays the stations out as rows under one line of headings on a wall, and as cards for the lead', async () => {
+    const lead = await render(specBoard());
+    expect(lead.querySelector('dw-station-status')?.classList.contains('rows')).toBe(false);
+
+    TestBed.resetTestingModule();
+    const wall = await render(specBoard(), 'wall', 'now');
+    const stations = wall.querySelector('dw-station-status')!;
+    expect(stations.classList.contains('rows')).toBe(true);
+    expect(Array.from(stations.querySelectorAll('.columns span'), (heading) => heading.textContent)).toEqual(['Last hour', 'This shift']);
+    expect(stations.querySelector('.columns')?.getAttribute('aria-hidden')).toBe('true');
+  });
+
+  it('keeps a due date and an ETA whole, breaking only between the day and the time', async () => {
+    const page = await render(specBoard());
+
+    const onTime = page.querySelector('[data-testid=board-order][data-order-code=SPEC-2]')!;
+    const parts = (cell: string) => Array.from(onTime.querySelectorAll(`[data-testid=${cell}] .part`), (part) => part.textContent);
+    expect(parts('order-due')).toEqual(['Tomorrow', '12:00']);
+    expect(parts('order-eta')).toEqual(['Today', '13:05']);
+  });
+
   it('gives each chart a label and a table of its numbers', async () => {
     const page = await render(specBoard());
 
@@ -144,7 +176,7 @@ describe('BoardView', () => {
     const many = Array.from({ length: 11 }, (_, i) => ({ ...specBoard().orders[1]!, id: 1000 + i, code: `SPEC-M${i}` }));
     const wall = await render(specBoard({ orders: many }), 'wall', 'now');
 
-    expect(wall.querySelectorAll('[data-testid=board-order]')).toHaveLength(8);
-    expect(text(wall, '[data-testid=orders-more]')).toBe('and 3 more open orders');
+    expect(wall.querySelectorAll('[data-testid=board-order]')).toHaveLength(6);
+    expect(text(wall, '[data-testid=orders-more]')).toBe('and 5 more open orders');
   });
 });

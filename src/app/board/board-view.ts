@@ -13,8 +13,8 @@ import { StationStatus } from './station-status';
 /** Which part of the board to show: all of it, or one of the two halves a wall display turns between. */
 export type BoardPart = 'all' | 'now' | 'trends';
 
-/** Rows of the order table a wall display shows before "and N more". */
-const WALL_ORDER_ROWS = 8;
+/** Rows of the order table a wall display shows before "and N more" (seen to fit beside six station rows at 1280 x 800). */
+const WALL_ORDER_ROWS = 6;
 
 /** The floor board itself: stations, stages, orders, charts, quality tiles, low film and flags. */
 @Component({

@@ -2,6 +2,7 @@ import { ChangeDetectionStrategy, Component, computed, input } from '@angular/co
 import { RouterLink } from '@angular/router';
 import { MatIconModule } from '@angular/material/icon';
 import type { BoardOrder } from '../../shared/board-contract';
+import type { BoardMode } from './board-charts';
 import { dayAndTime, KIND_LABELS } from './board-format';
 
 /** Open orders, soonest due first, with their ETA; an order at risk says so in words and with an icon. */
@@ -11,6 +12,7 @@ import { dayAndTime, KIND_LABELS } from './board-format';
   templateUrl: './orders-at-risk.html',
   styleUrl: './orders-at-risk.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
+  host: { '[class.wall]': 'mode() === "wall"' },
 })
 export class OrdersAtRisk {
   readonly orders = input.required<readonly BoardOrder[]>();
@@ -20,6 +22,7 @@ export class OrdersAtRisk {
   readonly links = input(false);
   /** Rows to show at most; the rest are counted below the table. */
   readonly maxRows = input<number | null>(null);
+  readonly mode = input<BoardMode>('lead');
 
   protected readonly kindLabels = KIND_LABELS;
   protected readonly atRiskCount = computed(() => this.orders().filter((order) => order.atRisk).length);
@@ -29,7 +32,8 @@ export class OrdersAtRisk {
   });
   protected readonly hidden = computed(() => this.orders().length - this.shown().length);
 
-  protected when(iso: string | null): string {
+  /** Day and time apart, so a narrow column breaks between them and never inside a date. */
+  protected whenParts(iso: string | null): { day: string; time: string } {
     return dayAndTime(iso, this.now());
   }
 }

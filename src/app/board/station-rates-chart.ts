@@ -56,7 +56,8 @@ export class StationRatesChart {
         tooltip: { enabled: this.mode() === 'lead' },
       },
       scales: {
-        x: { ticks: { color: look.ink, font }, grid: { color: look.grid } },
+        // Upright hour labels, every second or third one when they would crowd: slanted text reads badly from afar.
+        x: { ticks: { color: look.ink, font, maxRotation: 0, autoSkipPadding: look.fontPx / 2 }, grid: { color: look.grid } },
         y: {
           beginAtZero: true,
           ticks: { color: look.ink, font, precision: 0 },

@@ -152,6 +152,36 @@ describe('WallDisplay', () => {
     expect(page().querySelector('dw-board-view')).not.toBeNull();
   });
 
+  it('shows the display\'s own name in its header, not over the board', async () => {
+    await harness.navigateByUrl(`/display#token=${TOKEN}`);
+    await signInAndShow();
+
+    expect(page().querySelector('header.top .name')?.textContent?.trim()).toBe('Spec wall by the door');
+  });
+
+  it('makes its type smaller until a view fits the screen, and larger again when there is room', async () => {
+    await harness.navigateByUrl(`/display#token=${TOKEN}`);
+    await signInAndShow();
+    // jsdom lays nothing out: the board's box and its sections (made anew as the views turn) get heights by hand.
+    const box = page().querySelector('dw-board-view') as HTMLElement;
+    let contentPx = 1400;
+    Object.defineProperty(box, 'clientHeight', { configurable: true, get: () => 1000 });
+    const layout = jest.spyOn(Element.prototype, 'getBoundingClientRect').mockImplementation(function (this: Element) {
+      return { top: 0, bottom: this.tagName === 'SECTION' ? contentPx : 0 } as DOMRect;
+    });
+    const scaleNow = () => Number(page().style.getPropertyValue('--dw-wall-scale'));
+
+    window.dispatchEvent(new Event('resize'));
+    for (let waited = 0; scaleNow() > 0.7 && waited < 1000; waited += 5) await settle();
+    expect(scaleNow()).toBe(0.7);
+
+    contentPx = 500;
+    window.dispatchEvent(new Event('resize'));
+    for (let waited = 0; scaleNow() < 1 && waited < 1000; waited += 5) await settle();
+    expect(scaleNow()).toBe(1);
+    layout.mockRestore();
+  });
+
   it('turns between the floor now and the shift so far on a screen too small for both', async () => {
     await harness.navigateByUrl(`/display#token=${TOKEN}`);
     await signInAndShow();

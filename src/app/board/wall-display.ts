@@ -1,4 +1,18 @@
-import { ChangeDetectionStrategy, Component, DOCUMENT, DestroyRef, afterNextRender, computed, effect, inject, signal, untracked } from '@angular/core';
+import {
+  ChangeDetectionStrategy,
+  Component,
+  DOCUMENT,
+  DestroyRef,
+  ElementRef,
+  afterNextRender,
+  afterRenderEffect,
+  computed,
+  effect,
+  inject,
+  signal,
+  untracked,
+  viewChild,
+} from '@angular/core';
 import { Location } from '@angular/common';
 import { ActivatedRoute } from '@angular/router';
 import { MatIconModule } from '@angular/material/icon';
@@ -9,6 +23,7 @@ import { BoardConnection } from './board-connection';
 import { BoardLive } from './board-live';
 import { BOARD_TIMING } from './board-timing';
 import { BoardView, type BoardPart } from './board-view';
+import { contentHeight, nextWallScale } from './wall-fit';
 
 /** Storage key of this screen's display token, so it signs in again after a reboot. */
 export const DISPLAY_TOKEN_KEY = 'dwell.displayToken';
@@ -42,7 +57,7 @@ const REFUSED_SENTENCE =
   templateUrl: './wall-display.html',
   styleUrl: './wall-display.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  host: { '(window:resize)': 'measure()' },
+  host: { '(window:resize)': 'screenResized()', '[style.--dw-wall-scale]': 'scale()' },
 })
 export class WallDisplay {
   private readonly session = inject(Session);
@@ -56,16 +71,22 @@ export class WallDisplay {
   protected readonly state = signal<WallState>({ status: 'signing-in' });
   private readonly tall = signal(false);
   private readonly viewIndex = signal(0);
+  private readonly boardBox = viewChild(BoardView, { read: ElementRef });
+  private readonly resizes = signal(0);
+  /** Type scale per view, 1 = as large as the screen allows; lowered only when a view would not fit. */
+  private readonly scales = signal<Partial<Record<BoardPart, number>>>({});
   private retryTimer: ReturnType<typeof setTimeout> | null = null;
 
   protected readonly views = VIEWS;
   protected readonly cycling = computed(() => !this.tall());
   protected readonly view = computed(() => VIEWS[this.viewIndex() % VIEWS.length]!);
   protected readonly part = computed((): BoardPart => (this.cycling() ? this.view().part : 'all'));
+  protected readonly scale = computed(() => this.scales()[this.part()] ?? 1);
   protected readonly displayName = computed(() => (this.session.role() === 'display' ? this.session.user()?.name ?? '' : ''));
 
   constructor() {
-    this.measure();
+    this.screenResized();
+    this.fitViews();
     const cycle = setInterval(() => {
       if (this.cycling()) this.viewIndex.update((index) => (index + 1) % VIEWS.length);
     }, this.timing.cycleMs);
@@ -80,9 +101,31 @@ export class WallDisplay {
     this.begin();
   }
 
-  /** Decides from the screen's height whether the whole board fits or the views take turns. */
-  protected measure(): void {
+  /** Decides from the screen's height whether the whole board fits or the views take turns, and fits them again. */
+  protected screenResized(): void {
     this.tall.set((this.window?.innerHeight ?? 0) >= FITS_ALL_MIN_HEIGHT_PX);
+    this.resizes.update((count) => count + 1);
+  }
+
+  /**
+   * A wall view never scrolls and is never cut: after each render with new numbers, a new view or a
+   * new screen size, a view that runs past the bottom gets smaller type, and grows back when it has room.
+   */
+  private fitViews(): void {
+    afterRenderEffect((onCleanup) => {
+      const box = this.boardBox()?.nativeElement as HTMLElement | undefined;
+      this.live.board();
+      this.resizes();
+      if (!box) return;
+      const part = this.part();
+      const scale = this.scale();
+      const next = nextWallScale(scale, contentHeight(box), box.clientHeight);
+      if (next === scale) return;
+      // On the next turn of the event loop, not inside this render: a view that needs a second step
+      // then gets a fresh render rather than a chain of re-renders Angular would stop as endless.
+      const step = setTimeout(() => this.scales.update((scales) => ({ ...scales, [part]: next })));
+      onCleanup(() => clearTimeout(step));
+    });
   }
 
   private begin(): void {
