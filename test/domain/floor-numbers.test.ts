@@ -53,6 +53,21 @@ describe('the floor board\'s numbers, put together', () => {
     expect(numbers.orders.find((order) => order.code === 'B')!.atRisk).toBe(false);
   });
 
+  it('leaves a stage\'s observed rate out of the ETA until it rests on a dozen pieces', () => {
+    // Worked by hand: the packer packed 6 of bag 1's pieces by 08:45 (6 in 2 h = 3 per hour). On 6 pieces that rate
+    // says more about the bags reaching the bench than about the bench, so pack keeps the standard 20 per hour:
+    // (40 - 6) / 20 = 1.7 h -> 10:42. With 12 packed (6 per hour) the observed rate counts: 28 / 6 = 4.67 h -> 13:40.
+    const packed = (n: number): FloorInput => ({
+      ...input,
+      events: [...input.events, { bagId: 1, stationId: 6, stationKind: 'pack', kind: 'pack_done', quantity: n, at: at('08:45') }],
+      bags: [{ ...input.bags[0]!, counts: { ...bag1, packed: n } }, input.bags[1]!],
+    });
+    const few = floorNumbers(packed(6)).orders.find((order) => order.code === 'A')!;
+    expect(few).toMatchObject({ bottleneck: 'pack', rateSource: 'standard', eta: at('10:42') });
+    const enough = floorNumbers(packed(12)).orders.find((order) => order.code === 'A')!;
+    expect(enough).toMatchObject({ bottleneck: 'pack', rateSource: 'observed', eta: at('13:40') });
+  });
+
   it('works out today\'s takt from the time left and the pieces due by the shift end', () => {
     // 09:00 to 15:00 = 21,600 s; order A's 40 unpacked pieces are due today: 540 s per piece.
     expect(numbers.takt).toEqual({ availableSeconds: 21_600, piecesDue: 40, secondsPerPiece: 540 });

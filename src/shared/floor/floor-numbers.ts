@@ -5,7 +5,7 @@ import { floorYieldFromEvents, spoilPareto, type FloorYield, type ParetoRow } fr
 import { stageTimelines } from './stage-timeline';
 import { shiftSoFarWindow, stationRates, type StationRate } from './station-rate';
 import { taktForToday, type TodayTakt } from './takt';
-import { averageHoursInStage, systemFlow, throughputByWork, type SystemFlow } from './throughput';
+import { averageHoursInStage, ratesForEta, systemFlow, throughputByWork, type SystemFlow } from './throughput';
 import { workInProgress, type WorkInProgress } from './work-in-progress';
 import type { AddWorkingHours } from './working-time';
 
@@ -40,7 +40,7 @@ export interface FloorNumbers {
   takt: TodayTakt;
 }
 
-/** Computes the floor board's numbers; the shift-so-far throughput is the observed rate behind each ETA. */
+/** Computes the floor board's numbers; the shift-so-far throughput, once a stage has done enough pieces, is the observed rate behind each ETA. */
 export function floorNumbers(input: FloorInput): FloorNumbers {
   const soFar = shiftSoFarWindow(input.shift, input.events);
   const timelines = stageTimelines(input.bags, input.events);
@@ -51,7 +51,7 @@ export function floorNumbers(input: FloorInput): FloorNumbers {
     throughput,
     hoursInStage: averageHoursInStage(timelines, soFar),
     flow: systemFlow(timelines, soFar),
-    orders: orderEtas(input.orders, input.bags, throughput, input.standardPiecesPerHour, Date.parse(input.shift.now), input.addWorkingHours),
+    orders: orderEtas(input.orders, input.bags, ratesForEta(input.events, soFar), input.standardPiecesPerHour, Date.parse(input.shift.now), input.addWorkingHours),
     yield: floorYieldFromEvents(input.events, soFar),
     spoilReasons: spoilPareto(input.spoils),
     takt: taktForToday(input.planShift ?? input.shift, input.orders, input.bags),

@@ -4,9 +4,31 @@ import { HOUR_MS, perHour, type FloorEvent, type TimeWindow } from './floor-type
 import { packedAtMs, type StageTimeline } from './stage-timeline';
 import { donePieces } from './station-rate';
 
+/** Good pieces finished at each stage of work over a window. */
+export function piecesByWork(events: readonly FloorEvent[], window: TimeWindow): Record<StationKind, number> {
+  const entries = STATION_KINDS.map((work) => [work, donePieces(events, window, (e) => DONE_WORK[e.kind] === work)]);
+  return Object.fromEntries(entries) as Record<StationKind, number>;
+}
+
 /** Good pieces per hour finished at each stage of work over a window (null: the window has no length). */
 export function throughputByWork(events: readonly FloorEvent[], window: TimeWindow): Record<StationKind, number | null> {
-  const entries = STATION_KINDS.map((work) => [work, perHour(donePieces(events, window, (e) => DONE_WORK[e.kind] === work), window)]);
+  const pieces = piecesByWork(events, window);
+  const entries = STATION_KINDS.map((work) => [work, perHour(pieces[work], window)]);
+  return Object.fromEntries(entries) as Record<StationKind, number | null>;
+}
+
+/**
+ * Fewest good pieces a stage must have finished this shift before its observed rate stands for the
+ * stage in an ETA. Below it (a bench that has just started, or one starved of bags) the rate says
+ * more about the supply than the stage, and the shop's standard rate is used. Dwell's own rule.
+ */
+export const MIN_PIECES_FOR_OBSERVED_RATE = 12;
+
+/** The observed rates an ETA may rely on: those backed by at least MIN_PIECES_FOR_OBSERVED_RATE pieces, else null. */
+export function ratesForEta(events: readonly FloorEvent[], window: TimeWindow): Record<StationKind, number | null> {
+  const pieces = piecesByWork(events, window);
+  const rates = throughputByWork(events, window);
+  const entries = STATION_KINDS.map((work) => [work, pieces[work] >= MIN_PIECES_FOR_OBSERVED_RATE ? rates[work] : null]);
   return Object.fromEntries(entries) as Record<StationKind, number | null>;
 }
 
