@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import type { Knex } from 'knex';
 import { stageOf } from '../src/shared/events/bag-progress';
-import { shiftWindow } from '../src/shared/floor/shift-window';
+import { addDays, localDate, shiftOnDay } from '../src/shared/floor/shift-window';
 import type { EventKind, StationKind } from '../src/shared/names';
 
 const MINUTE_MS = 60 * 1000;
@@ -29,12 +29,13 @@ interface Span {
  * board opens on a shift with work in it whatever time the demo is seeded.
  */
 function workWindows(now: number, zone: string, start: string, end: string): { open: Span; ready: Span } {
-  let shift = shiftWindow(new Date(now), zone, start, end);
+  const today = localDate(new Date(now), zone);
+  const shiftOn = (offset: number) => shiftOnDay(addDays(today, offset), zone, start, end);
+  // The latest shift that has been running for an hour, and the one before it.
+  const offset = Date.parse(shiftOn(0).startAt) <= now - HOUR_MS ? 0 : -1;
   const endOf = (s: { endAt: string }) => Math.min(now, Date.parse(s.endAt)) - 5 * MINUTE_MS;
-  if (endOf(shift) - Date.parse(shift.startAt) < HOUR_MS) shift = shiftWindow(new Date(Date.parse(shift.startAt) - 1), zone, start, end);
-  const before = shiftWindow(new Date(Date.parse(shift.startAt) - 1), zone, start, end);
   const span = (s: { startAt: string; endAt: string }) => ({ from: Math.max(Date.parse(s.startAt), endOf(s) - 3 * HOUR_MS), to: endOf(s) });
-  return { open: span(shift), ready: span(before) };
+  return { open: span(shiftOn(offset)), ready: span(shiftOn(offset - 1)) };
 }
 
 /** Splits pieces into batches of about six, as an operator reports them. */

@@ -2,6 +2,7 @@ import { BOARD_ONLINE_SECONDS, type BoardFlag, type BoardHourly, type BoardLowRo
 import { noSpoils } from '../../src/shared/events/bag-progress';
 import { DONE_WORK } from '../../src/shared/floor/bag-counts';
 import { floorNumbers, type FloorNumbers } from '../../src/shared/floor/floor-numbers';
+import { shiftSoFarWindow } from '../../src/shared/floor/station-rate';
 import { HOUR_MS, type FloorBag, type FloorEvent, type FloorShift } from '../../src/shared/floor/floor-types';
 import { nextShift, shiftWindow } from '../../src/shared/floor/shift-window';
 import { shiftWorkingHours, type AddWorkingHours } from '../../src/shared/floor/working-time';
@@ -28,9 +29,9 @@ export class BoardService {
   async board(now = new Date()): Promise<BoardReply> {
     const settings = await this.repository.settings();
     const { shift, planShift, addWorkingHours } = shopTime(now, settings);
-    // The numbers need only this shift's events: rates, yield, spoils and the hourly chart are about the shift,
+    // The numbers need only this shift's events (from when it opened, so early work counts): rates, yield, spoils and the hourly chart are about the shift,
     // and each bag's counts (for work in progress and ETAs) are kept on the bag itself, not replayed from events.
-    const from = new Date(shift.startAt);
+    const from = new Date(shift.openedAt ?? shift.startAt);
     const [stations, lastEvents, events, bagRows, orders, rolls, flags] = await Promise.all([
       this.repository.stations(),
       this.repository.lastEventAt(),
@@ -180,9 +181,10 @@ function toFlag(flag: FlagRow, now: Date): BoardFlag {
   };
 }
 
-/** Good pieces per station in each whole hour from the shift start; the last slot is the hour now runs in. */
+/** Good pieces per station in each whole hour of the shift's working time so far; the last slot is the hour now runs in. */
 function hourly(stations: StationRow[], events: FloorEvent[], shift: FloorShift): BoardHourly {
-  const startMs = Date.parse(shift.startAt);
+  // The chart's hours are the rates' hours: from the shift start, or from the hour early work began in.
+  const startMs = shiftSoFarWindow(shift, events).fromMs;
   const nowMs = Date.parse(shift.now);
   const slots = nowMs > startMs ? Math.ceil((nowMs - startMs) / HOUR_MS) : 0;
   const hours = Array.from({ length: slots }, (_, i) => new Date(startMs + i * HOUR_MS).toISOString());

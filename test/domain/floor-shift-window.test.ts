@@ -17,23 +17,21 @@ function intlClock(at: string, timeZone: string): string {
 describe('the shift window in the shop\'s time zone', () => {
   it('gives a winter day shift of 07:00-15:30 in London as 07:00Z-15:30Z (GMT is UTC+00:00)', () => {
     const shift = shiftWindow(new Date('2026-01-14T10:00:00Z'), LONDON, '07:00', '15:30');
-    expect(shift).toEqual({ startAt: '2026-01-14T07:00:00.000Z', endAt: '2026-01-14T15:30:00.000Z', now: '2026-01-14T10:00:00.000Z' });
+    expect(shift).toMatchObject({ startAt: '2026-01-14T07:00:00.000Z', endAt: '2026-01-14T15:30:00.000Z', now: '2026-01-14T10:00:00.000Z' });
   });
 
-  it('shows the last shift, with the early work since, to a board opened at 06:30 before a 07:00 start', () => {
-    const shift = shiftWindow(new Date('2026-01-14T06:30:00Z'), LONDON, '07:00', '15:30');
-    expect(shift).toEqual({ startAt: '2026-01-13T07:00:00.000Z', endAt: '2026-01-13T15:30:00.000Z', now: '2026-01-14T06:30:00.000Z' });
+  it('opens the day\'s shift halfway through the night\'s break, so a board at 06:30 shows the shift about to start', () => {
+    // Worked by hand: 15:30 to 07:00 is a 15.5 h break; halfway is 23:15.
+    const early = shiftWindow(new Date('2026-01-14T06:30:00Z'), LONDON, '07:00', '15:30');
+    expect(early).toEqual({ startAt: '2026-01-14T07:00:00.000Z', endAt: '2026-01-14T15:30:00.000Z', now: '2026-01-14T06:30:00.000Z', openedAt: '2026-01-13T23:15:00.000Z' });
+    expect(shiftWindow(new Date('2026-01-13T23:15:00Z'), LONDON, '07:00', '15:30').startAt).toBe('2026-01-14T07:00:00.000Z');
   });
 
-  it('switches to today\'s shift the moment it starts', () => {
-    const shift = shiftWindow(new Date('2026-01-14T07:00:00Z'), LONDON, '07:00', '15:30');
-    expect(shift.startAt).toBe('2026-01-14T07:00:00.000Z');
-  });
-
-  it('keeps showing today\'s shift after it ended, overtime included, until the next one starts', () => {
-    const shift = shiftWindow(new Date('2026-01-14T22:45:00Z'), LONDON, '07:00', '15:30');
-    expect(shift.startAt).toBe('2026-01-14T07:00:00.000Z');
-    expect(shift.now).toBe('2026-01-14T22:45:00.000Z');
+  it('keeps showing the day\'s shift in the evening, overtime included, until halfway through the break', () => {
+    const evening = shiftWindow(new Date('2026-01-14T22:45:00Z'), LONDON, '07:00', '15:30');
+    expect(evening.startAt).toBe('2026-01-14T07:00:00.000Z');
+    expect(evening.now).toBe('2026-01-14T22:45:00.000Z');
+    expect(shiftWindow(new Date('2026-01-14T23:14:59Z'), LONDON, '07:00', '15:30').startAt).toBe('2026-01-14T07:00:00.000Z');
   });
 
   it('moves the shift one hour earlier in UTC on the day the clocks go forward (29 March 2026)', () => {

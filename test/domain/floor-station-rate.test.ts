@@ -20,6 +20,16 @@ describe('pieces per hour per station', () => {
     expect(rate.rollingHourPiecesPerHour).toBe(40);
   });
 
+  it('counts work begun before the shift start from the hour it began in', () => {
+    // Worked by hand: shift 06:00-14:30, opened at 21:45 the night before; 12 pieces at 05:15 and 6 at 05:40,
+    // looked at at 05:45. The working time runs from 05:00 (the shift clock's hour of the first piece): 18 in 0.75 h = 24/h.
+    // A piece at 21:30 the night before belongs to the shift before and is not counted.
+    const shift = { startAt: '2026-03-02T06:00:00Z', endAt: '2026-03-02T14:30:00Z', now: '2026-03-02T05:45:00Z', openedAt: '2026-03-01T21:45:00Z' };
+    const early = [e('cut_done', 12, '05:15'), e('cut_done', 6, '05:40'), { ...e('cut_done', 9, '05:00'), at: '2026-03-01T21:30:00Z' }];
+    const [rate] = stationRates(cutter, early, shift);
+    expect(rate).toMatchObject({ shiftPieces: 18, shiftPiecesPerHour: 24, rollingHourPieces: 18, rollingHourPiecesPerHour: 24 });
+  });
+
   it('does not thin the shift rate with the hours after the shift ended, but counts overtime', () => {
     // Worked by hand: shift 06:00-14:30 (8.5 h), 85 pieces in it, looked at at 20:00: 85 / 8.5 h = 10/h, not 85 / 14 h.
     const shift = { startAt: '2026-03-02T06:00:00Z', endAt: '2026-03-02T14:30:00Z', now: '2026-03-02T20:00:00Z' };

@@ -57,6 +57,11 @@ export interface FloorShift {
   startAt: string;
   endAt: string;
   now: string;
+  /**
+   * From when work counts towards this shift: halfway through the break before it, so work begun
+   * early belongs to it and overtime to the shift before. The shift start when absent.
+   */
+  openedAt?: string;
 }
 
 /** A span of time in epoch milliseconds: events with fromMs < at <= toMs fall in it. */

@@ -54,17 +54,24 @@ export function localDaysBetween(from: string, to: string): string[] {
 }
 
 /**
- * The shift on the floor in the shop's time zone: the latest one that has started (today's once its
- * start has passed, yesterday's before that). A shift whose end is not after its start ends the next
- * day. Its "now" is never cut off at the end, so overtime and early-morning work before the next
- * start still count towards the shift they follow; nothing done on the floor goes missing from the board.
+ * The shift on the floor in the shop's time zone. A shift whose end is not after its start ends the
+ * next day. The floor changes over from one shift to the next halfway through the break between
+ * them: until then overtime counts towards the shift that ended, after it early work counts towards
+ * the next one (its `openedAt`), so nothing done on the floor goes missing from the board.
  */
 export function shiftWindow(now: Date, timeZone: string, shiftStart: string, shiftEnd: string): FloorShift {
   checkTimeZone(timeZone);
   const today = localDate(now, timeZone);
-  const todays = shiftOnDay(today, timeZone, shiftStart, shiftEnd);
-  const shift = Date.parse(todays.startAt) <= now.getTime() ? todays : shiftOnDay(addDays(today, -1), timeZone, shiftStart, shiftEnd);
-  return { ...shift, now: now.toISOString() };
+  // Three days' shifts around today cover every changeover that can fall on it, overnight shifts included.
+  const shifts = [-2, -1, 0, 1].map((offset) => shiftOnDay(addDays(today, offset), timeZone, shiftStart, shiftEnd));
+  const nowMs = now.getTime();
+  for (let i = shifts.length - 1; i >= 1; i--) {
+    const previous = shifts[i - 1]!;
+    const shift = shifts[i]!;
+    const openedMs = (Date.parse(previous.endAt) + Date.parse(shift.startAt)) / 2;
+    if (openedMs <= nowMs) return { ...shift, now: now.toISOString(), openedAt: new Date(openedMs).toISOString() };
+  }
+  return { ...shifts[0]!, now: now.toISOString() };
 }
 
 /** The calendar day `days` after 'YYYY-MM-DD' (calendar arithmetic in UTC: a day is a date, not 24 hours of a zone). */
