@@ -88,7 +88,7 @@ describe('BoardView', () => {
     const wall = await render(specBoard(), 'wall', 'now');
     const stations = wall.querySelector('dw-station-status')!;
     expect(stations.classList.contains('rows')).toBe(true);
-    expect(Array.from(stations.querySelectorAll('.columns span'), (heading) => heading.textContent)).toEqual(['Last hour', 'This shift']);
+    expect(Array.from(stations.querySelectorAll('.columns span'), (heading) => heading.textContent)).toEqual(['Per hour', 'This shift']);
     expect(stations.querySelector('.columns')?.getAttribute('aria-hidden')).toBe('true');
   });
 
