@@ -4,6 +4,7 @@
 import { floorNumbers, type FloorInput } from '../../src/shared/floor/floor-numbers';
 import type { FloorBag, FloorEvent, FloorOrder, FloorStation } from '../../src/shared/floor/floor-types';
 import { STATION_KINDS, type EventKind } from '../../src/shared/names';
+import { medianMs } from './median-time';
 
 const RUNS = 9;
 const SHIFT = { startAt: '2026-03-02T07:00:00.000Z', endAt: '2026-03-02T15:30:00.000Z', now: '2026-03-02T14:00:00.000Z' };
@@ -33,17 +34,6 @@ function busyFloor(orderCount: number, eventsPerBag: number): FloorInput {
   return { stations, events, bags, orders, spoils, shift: SHIFT, standardPiecesPerHour: 40 };
 }
 
-function medianMs(task: () => void): number {
-  const times: number[] = [];
-  for (let i = 0; i < RUNS; i++) {
-    const start = performance.now();
-    task();
-    times.push(performance.now() - start);
-  }
-  times.sort((a, b) => a - b);
-  return times[Math.floor(times.length / 2)]!;
-}
-
 // The baseline's sum is printed at the end, so the engine cannot skip the loop as dead code.
 let sink = 0;
 const rows = [
@@ -52,9 +42,9 @@ const rows = [
 ].map(({ floor, input }) => {
   const baselineMs = medianMs(() => {
     for (const e of input.events) sink += e.quantity + (Date.parse(e.at) % 2);
-  });
+  }, RUNS);
   const numbers = floorNumbers(input);
-  const boardMs = medianMs(() => floorNumbers(input));
+  const boardMs = medianMs(() => floorNumbers(input), RUNS);
   return {
     floor,
     events: input.events.length,

@@ -2,6 +2,7 @@
 // the shelf layout alone as the same-run baseline, with the length, yield and area lower bound.
 import { layoutGang, shelfLayoutExtentMm } from '../../src/shared/cutting/gang-layout';
 import type { GangLayoutSettings, PieceGroup } from '../../src/shared/cutting/gang-layout-types';
+import { medianMs } from './median-time';
 
 const RUNS = 7;
 
@@ -32,17 +33,6 @@ function mixedPieces(total: number): PieceGroup[] {
   return groups;
 }
 
-function medianMs(task: () => void): number {
-  const times: number[] = [];
-  for (let i = 0; i < RUNS; i++) {
-    const start = performance.now();
-    task();
-    times.push(performance.now() - start);
-  }
-  times.sort((a, b) => a - b);
-  return times[Math.floor(times.length / 2)];
-}
-
 const settings: GangLayoutSettings = { rollWidthMm: 508, edgeMarginMm: 10, gapMm: 5, weedingBorderMm: 3, trailingMarginMm: 10, rulerUnit: 'in' };
 const groups = mixedPieces(500);
 const layout = layoutGang(groups, settings);
@@ -51,8 +41,8 @@ const paddedArea = layout.placements.reduce((sum, p) => sum + p.width * p.height
 const lowerBoundMm = paddedArea / usable + (settings.trailingMarginMm ?? 0);
 const shelfLengthMm = shelfLayoutExtentMm(groups, settings) + (settings.trailingMarginMm ?? 0);
 
-const layoutMs = medianMs(() => layoutGang(groups, settings));
-const shelfMs = medianMs(() => shelfLayoutExtentMm(groups, settings));
+const layoutMs = medianMs(() => layoutGang(groups, settings), RUNS);
+const shelfMs = medianMs(() => shelfLayoutExtentMm(groups, settings), RUNS);
 
 console.log(`pieces: ${layout.placements.length}, runs: ${RUNS}, kept strategy: ${layout.strategy}`);
 console.table([

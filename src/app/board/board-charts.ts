@@ -10,6 +10,7 @@ import {
   Tooltip,
   type PointStyle,
 } from 'chart.js';
+import type { ChartOptions, ChartType } from 'chart.js';
 import { provideCharts } from 'ng2-charts';
 
 /** Where the board is shown: the lead's light screen, or a dark wall across the room. */
@@ -63,4 +64,26 @@ const LOOKS: Readonly<Record<BoardMode, ChartLook>> = {
 /** The chart look for a mode. */
 export function chartLook(mode: BoardMode): ChartLook {
   return LOOKS[mode];
+}
+
+/** The font every board chart writes in, at the mode's size. */
+export function chartFont(look: ChartLook) {
+  return { size: look.fontPx, family: "'Atkinson Hyperlegible', system-ui, sans-serif" };
+}
+
+/** What every board chart shares: fills its box, never animates, legend below, tooltips for the lead only. */
+export function boardChartBase<T extends ChartType>(mode: BoardMode): ChartOptions<T> {
+  const look = chartLook(mode);
+  const font = chartFont(look);
+  return {
+    responsive: true,
+    maintainAspectRatio: false,
+    // Redrawn on every event: movement would distract more than it explains.
+    animation: false,
+    color: look.ink,
+    plugins: {
+      legend: { position: 'bottom', labels: { usePointStyle: true, color: look.ink, font } },
+      tooltip: { enabled: mode === 'lead' },
+    },
+  } as ChartOptions<T>;
 }

@@ -2,7 +2,7 @@ import { ChangeDetectionStrategy, Component, computed, input } from '@angular/co
 import type { ChartData, ChartOptions } from 'chart.js';
 import { BaseChartDirective } from 'ng2-charts';
 import type { BoardSpoilReason } from '../../shared/board-contract';
-import { chartLook, provideBoardCharts, type BoardMode } from './board-charts';
+import { boardChartBase, chartFont, chartLook, provideBoardCharts, type BoardMode } from './board-charts';
 import { percent } from './board-format';
 
 /** Spoiled pieces by reason, largest first, with the running share as a line: the few reasons that matter most. */
@@ -52,17 +52,9 @@ export class SpoilParetoChart {
 
   protected readonly options = computed((): ChartOptions<'bar' | 'line'> => {
     const look = chartLook(this.mode());
-    const font = { size: look.fontPx, family: "'Atkinson Hyperlegible', system-ui, sans-serif" };
+    const font = chartFont(look);
     return {
-      responsive: true,
-      maintainAspectRatio: false,
-      // Redrawn on every event: movement would distract more than it explains.
-      animation: false,
-      color: look.ink,
-      plugins: {
-        legend: { position: 'bottom', labels: { usePointStyle: true, color: look.ink, font } },
-        tooltip: { enabled: this.mode() === 'lead' },
-      },
+      ...boardChartBase(this.mode()),
       scales: {
         x: { ticks: { color: look.ink, font }, grid: { display: false } },
         y: {

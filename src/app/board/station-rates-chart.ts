@@ -2,7 +2,7 @@ import { ChangeDetectionStrategy, Component, computed, input } from '@angular/co
 import type { ChartData, ChartOptions } from 'chart.js';
 import { BaseChartDirective } from 'ng2-charts';
 import type { BoardHourly } from '../../shared/board-contract';
-import { chartLook, provideBoardCharts, type BoardMode } from './board-charts';
+import { boardChartBase, chartFont, chartLook, provideBoardCharts, type BoardMode } from './board-charts';
 import { clock } from './board-format';
 
 /** Good pieces per station in each hour of the shift, as lines, with a table of the same numbers. */
@@ -44,17 +44,9 @@ export class StationRatesChart {
 
   protected readonly options = computed((): ChartOptions<'line'> => {
     const look = chartLook(this.mode());
-    const font = { size: look.fontPx, family: "'Atkinson Hyperlegible', system-ui, sans-serif" };
+    const font = chartFont(look);
     return {
-      responsive: true,
-      maintainAspectRatio: false,
-      // Redrawn on every event: movement would distract more than it explains.
-      animation: false,
-      color: look.ink,
-      plugins: {
-        legend: { position: 'bottom', labels: { usePointStyle: true, color: look.ink, font } },
-        tooltip: { enabled: this.mode() === 'lead' },
-      },
+      ...boardChartBase(this.mode()),
       scales: {
         // Upright hour labels, every second or third one when they would crowd: slanted text reads badly from afar.
         x: { ticks: { color: look.ink, font, maxRotation: 0, autoSkipPadding: look.fontPx / 2 }, grid: { color: look.grid } },
