@@ -1,4 +1,5 @@
 import type { StationKind } from '../../src/shared/names';
+import { BagsRepository } from '../bags/bags-repository';
 import type { BagRow, Db, EventRow, OrderRow, SpoilRow, StationRow } from '../db/tables';
 
 /** The bag an event is about, locked for the event's transaction, with its order's status. */
@@ -46,12 +47,9 @@ export class EventsRepository {
     return Boolean(await this.db('spoil_reasons').where({ id, active: true }).first('id'));
   }
 
-  /** Pieces spoiled on this bag so far, by the stage they were spoiled at. */
+  /** Pieces spoiled on this bag so far, by the stage they were spoiled at (read in this transaction). */
   async spoiledByStage(bagId: number): Promise<Record<StationKind, number>> {
-    const rows = await this.db('spoils').where({ bag_id: bagId }).groupBy('stage').select('stage').sum({ n: 'quantity' });
-    const out: Record<StationKind, number> = { cut: 0, weed: 0, press: 0, pack: 0 };
-    for (const row of rows as { stage: StationKind; n: string | number }[]) out[row.stage] = Number(row.n);
-    return out;
+    return (await new BagsRepository(this.db).spoiledAtByBag([bagId])).get(bagId)!;
   }
 
   /** Names of other stations that already reported this kind of event on this bag. */

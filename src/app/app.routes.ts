@@ -5,8 +5,8 @@ import { Role, Session } from './auth/session';
 
 /** Where each role starts; a wall display shows the floor board outside the shell. */
 const HOME_BY_ROLE: Record<Role, string> = {
-  owner: 'stations',
-  lead: 'stations',
+  owner: 'board',
+  lead: 'board',
   operator: 'station-home',
   display: '/display',
 };

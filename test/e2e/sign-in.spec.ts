@@ -29,11 +29,12 @@ test('the lead signs in, sees the navigation, pairs this tablet with Press 1 and
     await screenshotAt(page, 'sign-in-wrong-password');
   });
 
-  await test.step('the right password opens the lead\'s screens', async () => {
+  await test.step('the right password opens the lead\'s Floor board, with the other screens in the top bar', async () => {
     await page.getByLabel('Password').fill(DEMO_ACCOUNTS.lead.password);
     await page.getByRole('button', { name: 'Sign in' }).click();
     await expect(page.getByTestId('signed-in-person')).toContainText(DEMO_ACCOUNTS.lead.name);
-    await expect(page.getByRole('navigation', { name: 'Screens' }).getByRole('link', { name: 'Stations' })).toBeVisible();
+    await expect(page.getByRole('heading', { name: 'Floor board', level: 1 })).toBeVisible();
+    await page.getByRole('navigation', { name: 'Screens' }).getByRole('link', { name: 'Stations' }).click();
     await expect(page.getByRole('heading', { name: 'Stations', level: 1 })).toBeVisible();
   });
 
