@@ -1,6 +1,6 @@
 import { expect, test } from '@playwright/test';
 import { DEMO_ACCOUNTS } from '../../seeds/data/demo-accounts';
-import { typePin } from './support/floor-steps';
+import { pairThisTabletAndHandOver, typePin } from './support/floor-steps';
 import { screenshotAt } from './support/screenshots';
 
 // Manual: how the lead signs in, pairs a tablet with a station, and how an operator then signs in
@@ -74,9 +74,7 @@ test('an operator signs in on the paired Press 1 tablet with a PIN', async ({ pa
     await page.getByLabel('E-mail').fill(DEMO_ACCOUNTS.lead.email);
     await page.getByLabel('Password').fill(DEMO_ACCOUNTS.lead.password);
     await page.getByRole('button', { name: 'Sign in' }).click();
-    const press1 = page.getByTestId('station-card').filter({ has: page.getByRole('heading', { name: 'Press 1', exact: true }) });
-    await press1.getByRole('button', { name: 'Pair this tablet' }).click();
-    await page.getByRole('button', { name: 'Sign out and open the PIN pad' }).click();
+    await pairThisTabletAndHandOver(page, 'Press 1');
   });
 
   await test.step('the PIN pad shows the station and the operators\' names', async () => {
