@@ -1,4 +1,4 @@
-import { expect, test, type APIRequestContext, type Locator, type Page } from '@playwright/test';
+import { expect, test, type APIRequestContext, type Locator, type Page, type WebSocketRoute } from '@playwright/test';
 import { readFileSync } from 'node:fs';
 import Papa from 'papaparse';
 import { DEMO_ACCOUNTS } from '../../seeds/data/demo-accounts';
@@ -11,7 +11,8 @@ import { screenshotAt } from './support/screenshots';
 // Manual: the Floor board, Pack check and the ready mail. The lead keeps the Floor board open on one
 // tablet. On a second tablet an operator at Press 1 presses one apron of the café's order 1042, and
 // the board's count for Press 1 and its chart of pieces per hour move within a second, with no
-// reload. On a third tablet an operator at Pack 1 scans the bowls club's last bag (1046-B), counts its
+// reload; when the board's own connection drops it says so, keeps its numbers and comes back by
+// itself. On a third tablet an operator at Pack 1 scans the bowls club's last bag (1046-B), counts its
 // polos in and marks it packed; the order is ready, the customer's ready-for-pickup mail goes out,
 // and the lead reads it in the Mail outbox as the customer sees it. The lead opens Reports and
 // downloads the week as CSV. Last, the lead adds a wall display, and the wall screen opens the board
@@ -64,11 +65,18 @@ test('the lead watches the floor live, the last bag packed mails the customer, a
   const pressTablet = await (await browser.newContext({ viewport: { width: 1024, height: 768 } })).newPage();
   const packTablet = await (await browser.newContext({ viewport: { width: 1024, height: 768 } })).newPage();
   const pressStation = board.getByTestId('board-station').and(board.locator('[data-station-name="Press 1"]'));
+  const boardSockets: WebSocketRoute[] = [];
 
   try {
     await test.step('the lead shortens the demo recipe\'s seconds for this journey', async () => {
       const put = await lead.put(`/api/recipes/${recipe.id}`, { data: { ...recipeValues(recipe), prePressS: 1, dwellS: 2, secondPressS: recipe.secondPressS ? 1 : recipe.secondPressS } });
       expect(put.ok()).toBe(true);
+    });
+
+    // The board's live connection passes through the test, so a later step can cut it like a Wi-Fi drop.
+    await board.routeWebSocket(/\/socket\.io\//, (socket) => {
+      socket.connectToServer();
+      boardSockets.push(socket);
     });
 
     await test.step('the lead signs in and opens the Floor board: stations, stages, orders and charts', async () => {
@@ -117,6 +125,19 @@ test('the lead watches the floor live, the last bag packed mails the customer, a
       // A bag sits in one stage with all its pieces until every piece has passed: one apron pressed leaves 1042-A weeded.
       expect(await numberIn(board.getByTestId('stage-column').and(board.locator('[data-stage="weeded"]')).getByTestId('stage-pieces'))).toBe(weededBefore);
       await expect(pressStation.getByTestId('station-online')).toContainText('Online');
+    });
+
+    await test.step('the board says when its own connection drops, keeps the last numbers, and recovers by itself', async () => {
+      const shown = await pressStation.getByTestId('station-shift-pieces').innerText();
+      // The hub cannot be reached: new connections are refused and the open one drops.
+      await board.route('**/socket.io/**', (route) => route.abort());
+      for (const socket of boardSockets.splice(0)) await socket.close();
+      await expect(board.getByTestId('board-connection')).toContainText('Connection lost');
+      await expect(pressStation.getByTestId('station-shift-pieces')).toHaveText(shown);
+      await screenshotAt(board, 'floor-board-connection-lost');
+      // The network is back: the board reconnects with no tap and no reload.
+      await board.unroute('**/socket.io/**');
+      await expect(board.getByTestId('board-connection')).toContainText('Live', { timeout: 20_000 });
     });
 
     await test.step('on a third tablet, an operator at Pack 1 scans the bowls club\'s last bag and counts the polos in', async () => {
