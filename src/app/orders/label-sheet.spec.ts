@@ -4,11 +4,11 @@ import { provideHttpClient } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { provideRouter } from '@angular/router';
 import { MatIconTestingModule } from '@angular/material/icon/testing';
-import jsQR from 'jsqr';
 import QRCode from 'qrcode';
 import type { BagSummary, OrderDetail } from '../../shared/intake-contract';
 import { LabelSheet } from './label-sheet';
 import { PRINT_PAGE } from './print-page';
+import { readDrawnQr } from './bag-qr-testing';
 
 const TOKEN_A = 'a'.repeat(20) + '_' + 'B'.repeat(22);
 const TOKEN_B = 'c'.repeat(20) + '-' + 'D'.repeat(22);
@@ -57,23 +57,6 @@ const ORDER: OrderDetail = {
   ],
   bags: [bag(1, 'BY-1007-01', TOKEN_A), bag(2, 'BY-1007-02', TOKEN_B)],
 };
-
-/** Draws the label's SVG path modules into pixels, 4 px per module, for an independent decoder. */
-function decode(svg: SVGSVGElement): string | null {
-  const extent = Number(svg.getAttribute('viewBox')!.split(' ')[2]);
-  const scale = 4;
-  const side = extent * scale;
-  const pixels = new Uint8ClampedArray(side * side * 4).fill(255);
-  for (const [, x, y] of svg.querySelector('path')!.getAttribute('d')!.matchAll(/M(\d+) (\d+)/g)) {
-    for (let dy = 0; dy < scale; dy++) {
-      for (let dx = 0; dx < scale; dx++) {
-        const offset = ((Number(y) * scale + dy) * side + Number(x) * scale + dx) * 4;
-        pixels[offset] = pixels[offset + 1] = pixels[offset + 2] = 0;
-      }
-    }
-  }
-  return jsQR(pixels, side, side)?.data ?? null;
-}
 
 describe('LabelSheet', () => {
   let fixture: ComponentFixture<LabelSheet>;
@@ -135,8 +118,8 @@ describe('LabelSheet', () => {
     // jsQR implements ISO/IEC 18004 decoding separately from the qrcode package that drew the symbol.
     const svgs = element().querySelectorAll<SVGSVGElement>('dw-bag-qr svg');
 
-    expect(decode(svgs[0])).toBe(`${location.origin}/bag/${TOKEN_A}`);
-    expect(decode(svgs[1])).toBe(`${location.origin}/bag/${TOKEN_B}`);
+    expect(readDrawnQr(svgs[0])).toBe(`${location.origin}/bag/${TOKEN_A}`);
+    expect(readDrawnQr(svgs[1])).toBe(`${location.origin}/bag/${TOKEN_B}`);
   });
 
   it('prints through the print token and links each stock\'s PDF', () => {

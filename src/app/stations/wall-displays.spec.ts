@@ -4,28 +4,11 @@ import { provideHttpClient } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { Clipboard } from '@angular/cdk/clipboard';
 import { MatIconTestingModule } from '@angular/material/icon/testing';
-import jsQR from 'jsqr';
 import { WallDisplays } from './wall-displays';
+import { readDrawnQr } from '../orders/bag-qr-testing';
 
 const DISPLAYS = [{ id: 4, name: 'Spec wall by the presses', createdAt: '2030-05-01T08:00:00Z' }];
 const NEW_TOKEN = 'spec-new-display-token-abcdefghij';
-
-/** Reads the QR code the screen drew (its SVG path of modules) with jsQR, 4 px per module. */
-function decodeDrawnQr(svg: SVGSVGElement): string | null {
-  const extent = Number(svg.getAttribute('viewBox')!.split(' ')[2]);
-  const scale = 4;
-  const side = extent * scale;
-  const pixels = new Uint8ClampedArray(side * side * 4).fill(255);
-  for (const [, x, y] of svg.querySelector('path')!.getAttribute('d')!.matchAll(/M(\d+) (\d+)/g)) {
-    for (let dy = 0; dy < scale; dy++) {
-      for (let dx = 0; dx < scale; dx++) {
-        const offset = ((Number(y) * scale + dy) * side + Number(x) * scale + dx) * 4;
-        pixels[offset] = pixels[offset + 1] = pixels[offset + 2] = 0;
-      }
-    }
-  }
-  return jsQR(pixels, side, side)?.data ?? null;
-}
 
 describe('WallDisplays', () => {
   let fixture: ComponentFixture<WallDisplays>;
@@ -95,7 +78,7 @@ describe('WallDisplays', () => {
     const link = `${location.origin}/display#token=${NEW_TOKEN}`;
     expect(element().querySelector('[data-testid=display-link]')?.textContent?.trim()).toBe(link);
     // jsQR decodes ISO/IEC 18004 symbols independently of the qrcode package that drew this one.
-    expect(decodeDrawnQr(element().querySelector<SVGSVGElement>('[data-testid=new-display-link] svg')!)).toBe(link);
+    expect(readDrawnQr(element().querySelector<SVGSVGElement>('[data-testid=new-display-link] svg')!)).toBe(link);
     button('Copy the link').click();
     await settle();
     expect(copy).toHaveBeenCalledWith(link);
