@@ -139,7 +139,7 @@ describe('pushing station events', () => {
     const lead = await openSocket(hub.url, await leadCookie(hub.url), sockets);
     const tablet = await openSocket(hub.url, press.cookie, sockets);
     const updates: BoardUpdate[] = [];
-    lead.on('board:update', (update) => updates.push(update));
+    const firstUpdate = new Promise<void>((resolve) => lead.on('board:update', (update) => resolve(void updates.push(update))));
     const changed = new Promise<{ bagIds: number[]; version: number }>((resolve) => tablet.on('tickets:changed', resolve));
     const at = { bagId: bag.id, stationId: press.stationId, userId: press.userId };
 
@@ -150,6 +150,8 @@ describe('pushing station events', () => {
     const change = await changed;
     expect(change.bagIds).toEqual([bag.id]);
     expect(change.version).toBe(Number((await bagRow(bag.id)).version));
+    await firstUpdate;
+    // One batch is one board update: a second one would have arrived by now.
     await new Promise((resolve) => setTimeout(resolve, 200));
     expect(updates).toEqual([{ bagIds: [bag.id], at: expect.any(String) }]);
     const station = await hub.db('stations').where({ id: press.stationId }).first();
