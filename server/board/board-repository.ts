@@ -12,6 +12,7 @@ export interface ShiftEventRow {
   kind: EventKind;
   quantity: number;
   server_at: Date;
+  client_at: Date;
   spoil_stage: StationKind | null;
   reason: string | null;
 }
@@ -36,8 +37,8 @@ export interface FlagRow {
   server_at: Date | null;
 }
 
-/** The event kinds that move the floor numbers: done work and spoils. */
-export const COUNTED_KINDS: readonly EventKind[] = ['cut_done', 'weed_done', 'press_done', 'pack_done', 'spoil'];
+/** The event kinds the floor numbers read: done work and spoils move them; a scan marks when work on a bag began. */
+export const BOARD_EVENT_KINDS: readonly EventKind[] = ['scan', 'cut_done', 'weed_done', 'press_done', 'pack_done', 'spoil'];
 
 /** Reads what the floor board is made of, in a handful of queries. */
 export class BoardRepository {
@@ -67,8 +68,8 @@ export class BoardRepository {
       .join('stations', 'stations.id', 'events.station_id')
       .leftJoin('spoils', 'spoils.event_id', 'events.id')
       .leftJoin('spoil_reasons', 'spoil_reasons.id', 'spoils.reason_id')
-      // Scans and test cuts move no numbers; naming the kinds also lets MariaDB range-read the (kind, server_at) index.
-      .whereIn('events.kind', COUNTED_KINDS)
+      // Test cuts tell the board nothing; naming the kinds also lets MariaDB range-read the (kind, server_at) index.
+      .whereIn('events.kind', BOARD_EVENT_KINDS)
       .whereBetween('events.server_at', [from, to])
       .whereNotNull('events.bag_id')
       .orderBy('events.seq')
@@ -79,6 +80,7 @@ export class BoardRepository {
         'events.kind',
         'events.quantity',
         'events.server_at',
+        'events.client_at',
         'spoils.stage as spoil_stage',
         'spoil_reasons.label as reason',
       )) as ShiftEventRow[];

@@ -98,6 +98,7 @@ function toFloorEvent(row: ShiftEventRow): FloorEvent {
     kind: row.kind,
     quantity: row.quantity,
     at: row.server_at.toISOString(),
+    recordedAt: row.client_at.toISOString(),
     ...(row.spoil_stage ? { spoilStage: row.spoil_stage } : {}),
   };
 }

@@ -6,10 +6,10 @@ import { emptyCounts } from '../../src/shared/floor/bag-counts';
 // 30 in the rolling hour 08:00-09:00 = 30 per hour.
 // Bag 1 (order A, 40 pieces) is cut and weeded 40, pressed 30, so it sits in "weeded" with 10 left to press
 // and 40 to pack. Bag 2 (order B, 12 pieces) is still queued.
-// Order A is due at 09:30. Observed press rate for the shift = 15 per hour; nothing packed yet, so pack
-// uses the standard 20 per hour: press needs 10/15 = 0.67 h, pack 40/20 = 2 h, so pack is the
-// bottleneck and the ETA is 09:00 + 2 h = 11:00, after 09:30: at risk (common practice, no published source,
-// for using the slowest remaining stage as the finish estimate).
+// Order A is due at 09:30. Press worked 20 minutes (08:30 to 08:50) for the 10 pieces after its first event, fewer
+// than the dozen an observed rate needs, and nothing is packed yet, so both use the standard 20 per hour:
+// press needs 10/20 = 0.5 h, pack 40/20 = 2 h, so pack is the bottleneck and the ETA is 09:00 + 2 h = 11:00,
+// after 09:30: at risk (common practice, no published source, for using the slowest remaining stage as the finish estimate).
 const at = (hhmm: string) => `2026-12-02T${hhmm}:00.000Z`;
 const bag1 = { ...emptyCounts(), cut: 40, weeded: 40, pressed: 30 };
 const input: FloorInput = {
@@ -53,19 +53,25 @@ describe('the floor board\'s numbers, put together', () => {
     expect(numbers.orders.find((order) => order.code === 'B')!.atRisk).toBe(false);
   });
 
-  it('leaves a stage\'s observed rate out of the ETA until it rests on a dozen pieces', () => {
-    // Worked by hand: the packer packed 6 of bag 1's pieces by 08:45 (6 in 2 h = 3 per hour). On 6 pieces that rate
-    // says more about the bags reaching the bench than about the bench, so pack keeps the standard 20 per hour:
-    // (40 - 6) / 20 = 1.7 h -> 10:42. With 12 packed (6 per hour) the observed rate counts: 28 / 6 = 4.67 h -> 13:40.
+  it('leaves a stage\'s observed rate out of the ETA until it rests on a dozen pieces, and the bench\'s waiting out of that rate', () => {
+    // Worked by hand: the packer stood waiting until 08:30, opened bag 1 then (a scan) and packed 6 of its pieces at 08:45.
+    // Six pieces are too few to stand for the bench, so pack keeps the standard 20 per hour: (40 - 6) / 20 = 1.7 h -> 10:42.
+    // With 12 packed at 08:45 the bench's own rate counts: 12 pieces in 15 working minutes = 48 per hour, and
+    // (40 - 12) / 48 = 0.583 h = 35 min -> 09:35 (press: 10 / 20 = 0.5 h, so pack is still the bottleneck). Over the
+    // shift so far the bench packed 12 in 2 h, 6 per hour, which would have put the ETA at 13:40 for want of bags.
     const packed = (n: number): FloorInput => ({
       ...input,
-      events: [...input.events, { bagId: 1, stationId: 6, stationKind: 'pack', kind: 'pack_done', quantity: n, at: at('08:45') }],
+      events: [
+        ...input.events,
+        { bagId: 1, stationId: 6, stationKind: 'pack', kind: 'scan', quantity: 0, at: at('08:30') },
+        { bagId: 1, stationId: 6, stationKind: 'pack', kind: 'pack_done', quantity: n, at: at('08:45') },
+      ],
       bags: [{ ...input.bags[0]!, counts: { ...bag1, packed: n } }, input.bags[1]!],
     });
     const few = floorNumbers(packed(6)).orders.find((order) => order.code === 'A')!;
     expect(few).toMatchObject({ bottleneck: 'pack', rateSource: 'standard', eta: at('10:42') });
     const enough = floorNumbers(packed(12)).orders.find((order) => order.code === 'A')!;
-    expect(enough).toMatchObject({ bottleneck: 'pack', rateSource: 'observed', eta: at('13:40') });
+    expect(enough).toMatchObject({ bottleneck: 'pack', rateSource: 'observed', bottleneckRate: 48, eta: at('09:35') });
   });
 
   it('works out today\'s takt from the time left and the pieces due by the shift end', () => {

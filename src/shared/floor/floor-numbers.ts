@@ -5,8 +5,9 @@ import { floorYieldFromEvents, spoilPareto, type FloorYield, type ParetoRow } fr
 import { stageTimelines } from './stage-timeline';
 import { shiftSoFarWindow, stationRates, type StationRate } from './station-rate';
 import { taktForToday, type TodayTakt } from './takt';
-import { averageHoursInStage, ratesForEta, systemFlow, throughputByWork, type SystemFlow } from './throughput';
+import { averageHoursInStage, systemFlow, throughputByWork, type SystemFlow } from './throughput';
 import { workInProgress, type WorkInProgress } from './work-in-progress';
+import { workingRatesByWork } from './working-rate';
 import type { AddWorkingHours } from './working-time';
 
 /** Everything the floor numbers are computed from. */
@@ -40,7 +41,7 @@ export interface FloorNumbers {
   takt: TodayTakt;
 }
 
-/** Computes the floor board's numbers; the shift-so-far throughput, once a stage has done enough pieces, is the observed rate behind each ETA. */
+/** Computes the floor board's numbers; each stage's rate over its working time this shift, once it rests on enough pieces, is the observed rate behind each ETA. */
 export function floorNumbers(input: FloorInput): FloorNumbers {
   const soFar = shiftSoFarWindow(input.shift, input.events);
   const timelines = stageTimelines(input.bags, input.events);
@@ -51,7 +52,7 @@ export function floorNumbers(input: FloorInput): FloorNumbers {
     throughput,
     hoursInStage: averageHoursInStage(timelines, soFar),
     flow: systemFlow(timelines, soFar),
-    orders: orderEtas(input.orders, input.bags, ratesForEta(input.events, soFar), input.standardPiecesPerHour, Date.parse(input.shift.now), input.addWorkingHours),
+    orders: orderEtas(input.orders, input.bags, workingRatesByWork(input.events, soFar), input.standardPiecesPerHour, Date.parse(input.shift.now), input.addWorkingHours),
     yield: floorYieldFromEvents(input.events, soFar),
     spoilReasons: spoilPareto(input.spoils),
     takt: taktForToday(input.planShift ?? input.shift, input.orders, input.bags),

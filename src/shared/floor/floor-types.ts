@@ -9,6 +9,11 @@ export interface FloorEvent {
   /** Pieces (0 for a scan). */
   quantity: number;
   at: string;
+  /**
+   * When the station's tablet recorded it, by the tablet's own clock (ISO 8601). Time between one
+   * station's events is measured on it, as work done offline reaches the hub in one batch; `at` when absent.
+   */
+  recordedAt?: string;
   /** For a spoil: the stage of work where the pieces were lost; the station's kind when absent. */
   spoilStage?: StationKind;
 }

@@ -22,7 +22,7 @@ export interface OrderEta {
 
 /**
  * ETA for each order. For every stage of work w the order still needs (remaining_w > 0):
- *   rate_w  = observed good pieces per hour at w, or the shop's standard pieces per hour when none was observed;
+ *   rate_w  = good pieces per working hour observed at w (see working-rate.ts), or the shop's standard pieces per hour when none was;
  *   hours_w = remaining_w / rate_w.
  * The bottleneck is the w with the largest hours_w (ties go to the later stage), and
  *   ETA = now + hours_bottleneck, counted in working hours (time between shifts does not work);

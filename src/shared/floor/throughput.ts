@@ -18,21 +18,6 @@ export function throughputByWork(events: readonly FloorEvent[], window: TimeWind
 }
 
 /**
- * Fewest good pieces a stage must have finished this shift before its observed rate stands for the
- * stage in an ETA. Below it (a bench that has just started, or one starved of bags) the rate says
- * more about the supply than the stage, and the shop's standard rate is used. Dwell's own rule.
- */
-export const MIN_PIECES_FOR_OBSERVED_RATE = 12;
-
-/** The observed rates an ETA may rely on: those backed by at least MIN_PIECES_FOR_OBSERVED_RATE pieces, else null. */
-export function ratesForEta(events: readonly FloorEvent[], window: TimeWindow): Record<StationKind, number | null> {
-  const pieces = piecesByWork(events, window);
-  const rates = throughputByWork(events, window);
-  const entries = STATION_KINDS.map((work) => [work, pieces[work] >= MIN_PIECES_FOR_OBSERVED_RATE ? rates[work] : null]);
-  return Object.fromEntries(entries) as Record<StationKind, number | null>;
-}
-
-/**
  * Average hours a bag stayed in each stage, over stays that ended within the window
  * (a stay ends at the bag's next stage change); null when none ended there. "packed" never ends.
  */
