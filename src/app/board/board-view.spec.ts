@@ -56,6 +56,13 @@ describe('BoardView', () => {
     expect(text(page, '[data-testid=orders-at-risk-count]')).toBe('1 at risk');
   });
 
+  it('names the slowest stage of an order only when its rate was seen on the floor', async () => {
+    const page = await render(specBoard());
+    // SPEC-1 waits on presses seen at work this shift; SPEC-2's ETA rests on the shop's standard rate, where every stage is alike.
+    expect(text(page.querySelector('[data-order-code=SPEC-1]')!, '[data-testid=order-left]')).toBe('88 slowest: Press');
+    expect(text(page.querySelector('[data-order-code=SPEC-2]')!, '[data-testid=order-left]')).toBe('24');
+  });
+
   it('says a station is offline in words, with its last event and last sync', async () => {
     const page = await render(specBoard());
 
