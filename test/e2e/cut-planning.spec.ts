@@ -1,6 +1,7 @@
 import { expect, test, type Page } from '@playwright/test';
 import { DEMO_ACCOUNTS } from '../../seeds/data/demo-accounts';
-import { pairThisTabletAndHandOver, signInWithEmail, signInWithPin } from './support/floor-steps';
+import type { OrderDetail, OrderPage } from '../../src/shared/intake-contract';
+import { leadApi, pairThisTabletAndHandOver, signInWithEmail, signInWithPin } from './support/floor-steps';
 import { screenshotAt } from './support/screenshots';
 
 // Manual: how the lead gangs bags of the same film on the Gang planner and confirms the cut, and how
@@ -11,6 +12,15 @@ import { screenshotAt } from './support/screenshots';
 async function shownLengthMm(page: Page): Promise<number> {
   const text = await page.getByTestId('plan-length').locator('.small').innerText();
   return Number(text.replace(/[^0-9]/g, ''));
+}
+
+/** The token printed in a bag label's QR code, as the lead's API gives it. */
+async function bagToken(orderCode: string, bagCode: string): Promise<string> {
+  const lead = await leadApi();
+  const orders = (await (await lead.get('/api/orders')).json()) as OrderPage;
+  const order = (await (await lead.get(`/api/orders/${orders.items.find((o) => o.code === orderCode)!.id}`)).json()) as OrderDetail;
+  await lead.dispose();
+  return order.bags.find((b) => b.code === bagCode)!.token;
 }
 
 async function rollRemaining(page: Page, label: string): Promise<number> {
@@ -57,6 +67,13 @@ test('the lead gangs two bags and confirms; the cut operator test-cuts and confi
   await test.step('the lead pairs this tablet with Cut 1 and hands it to the cut operator', async () => {
     await pairThisTabletAndHandOver(page, 'Cut 1');
     await signInWithPin(page, DEMO_ACCOUNTS.operators[0]);
+  });
+
+  await test.step('the operator reads bag 1043-D\'s label with the tablet\'s camera: its link opens the Cut station with the bag in the cut', async () => {
+    await page.goto(`/bag/${await bagToken('1043', '1043-D')}`);
+    await expect(page.getByRole('heading', { name: 'Cut station', level: 1 })).toBeVisible();
+    await expect(page.getByRole('region', { name: 'Bags in this cut' })).toContainText('1043-D');
+    await expect(page.getByTestId('layout-preview')).toBeVisible();
   });
 
   await test.step('at Cut 1, the operator opens the remaining white bags at the Cut station', async () => {

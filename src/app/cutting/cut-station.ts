@@ -61,15 +61,22 @@ export class CutStation {
       this.filmId.set(film);
       this.bagIds.set(bags);
       await this.refreshPreview();
+      return;
     }
+    // Opened from a bag label's link.
+    const bag = Number(params.get('bag'));
+    if (Number.isInteger(bag) && bag > 0) await this.addBag(bag, 'This bag');
   }
 
   /** A bag was scanned: add it to the gang on the film it still needs (the gang's film first). */
   protected async bagScanned(found: StationTicket | string): Promise<void> {
     if (typeof found === 'string') return;
+    await this.addBag(found.bag.id, `Bag ${found.bag.code}`);
+  }
+
+  private async addBag(bagId: number, named: string): Promise<void> {
     this.done.set(null);
     this.problem.set(null);
-    const bagId = found.bag.id;
     let groups: CutGroup[];
     try {
       groups = await firstValueFrom(this.api.groups());
@@ -80,7 +87,7 @@ export class CutStation {
     const holding = groups.filter((g) => g.bags.some((b) => b.bagId === bagId));
     const group = holding.find((g) => g.filmId === this.filmId()) ?? holding[0];
     if (!group) {
-      this.problem.set(`Bag ${found.bag.code} is not waiting to be cut.`);
+      this.problem.set(`${named} is not waiting to be cut.`);
       return;
     }
     if (group.filmId !== this.filmId()) {

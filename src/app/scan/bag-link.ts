@@ -9,7 +9,7 @@ import { TicketCache } from '../sync/ticket-cache';
 import { parseBagInput } from './bag-input';
 
 /** The screen each station kind works a bag on. */
-const SCREEN_BY_KIND: Record<StationKind, string> = { cut: '/station-home', weed: '/weed', press: '/press', pack: '/pack' };
+const SCREEN_BY_KIND: Record<StationKind, string> = { cut: '/cut-station', weed: '/weed', press: '/press', pack: '/pack' };
 
 /** Opened from a bag label's QR code: finds the bag and sends the person to their screen for it. */
 @Component({
