@@ -95,9 +95,10 @@ export class MailRepository {
     return Boolean(row);
   }
 
-  /** The shop's name, address and settings. */
-  async shop(): Promise<ShopSettingsRow> {
-    const row = await this.db('shop_settings').where({ id: 1 }).first();
+  /** The shop's name, address and settings; `lock` holds the row until the transaction ends. */
+  async shop(options: { lock?: boolean } = {}): Promise<ShopSettingsRow> {
+    const query = this.db('shop_settings').where({ id: 1 });
+    const row = await (options.lock ? query.forUpdate() : query).first();
     if (!row) throw new Error('The shop settings are missing: run the migrations and seeds.');
     return row;
   }

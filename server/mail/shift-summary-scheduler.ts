@@ -89,7 +89,9 @@ export class ShiftSummaryScheduler {
     const board = await this.numbersAt(at);
     const ids = await this.db.transaction(async (trx) => {
       const repository = new MailRepository(trx);
-      const shop = await repository.shop();
+      // Holding the shop's row lets only one hub process queue an ended shift's summary; the next one finds it queued.
+      const shop = await repository.shop({ lock: true });
+      if (final && (await repository.hasShiftSummary(shiftDate))) return [];
       const content = shiftSummaryMessage({ shop: await repository.shopIdentity(), timeZone: shop.time_zone, shiftDate, final, board });
       const queued: number[] = [];
       for (const to of await repository.activeAddresses('owner')) {

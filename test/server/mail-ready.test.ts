@@ -163,6 +163,22 @@ describe('the end-of-shift summary', () => {
     expect(mail.html).toContain('Orders at risk');
   });
 
+  it('is queued once when two hub processes look at the same moment', async () => {
+    const shop = (await hub.db('shop_settings').where({ id: 1 }).first())!;
+    const afterEnd = new Date(new Date(shiftWindow(new Date(), shop.time_zone, shop.shift_start, shop.shift_end).endAt).getTime() + 120_000);
+    const ended = endedShift(afterEnd, shop.time_zone, shop.shift_start, shop.shift_end)!;
+    const summaries = () => hub.db('mail_log').where({ kind: 'shift_summary' }).whereRaw("JSON_UNQUOTE(JSON_EXTRACT(related, '$.shiftDate')) = ?", [ended.shiftDate]);
+    await summaries().delete();
+    const board = new BoardService(hub.db);
+    const scheduler = () => new ShiftSummaryScheduler(hub.db, hub.mail, (now) => board.board(now), pino({ level: 'silent' }));
+    const owners = await hub.db('users').where({ role: 'owner', active: true }).whereNotNull('email');
+
+    const queued = await Promise.all([scheduler().check(afterEnd), scheduler().check(afterEnd)]);
+
+    expect(queued.reduce((a, b) => a + b, 0)).toBe(owners.length);
+    expect(await summaries()).toHaveLength(owners.length);
+  });
+
   it('goes to the owner at once when a lead asks for the shift so far', async () => {
     const res = await request(hub.url).post('/api/mail/shift-summary').set('Cookie', lead).expect(201);
     expect(res.body).toMatchObject({ kind: 'shift_summary', to: DEMO_ACCOUNTS.owner.email, related: { final: false } });
