@@ -1,14 +1,12 @@
 import { ComponentFixture, TestBed } from '@angular/core/testing';
-import { importProvidersFrom, provideZonelessChangeDetection } from '@angular/core';
-import { provideHttpClient } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
-import { Router, provideRouter } from '@angular/router';
-import { MatIconTestingModule } from '@angular/material/icon/testing';
+import { HttpTestingController } from '@angular/common/http/testing';
+import { Router } from '@angular/router';
 import { BROWSER_STORAGE } from '../core/browser-storage';
 import { MemoryStorage } from '../core/memory-storage';
 import { DEVICE_TOKEN_KEY } from './device-pairing';
 import { PinPad } from './pin-pad';
 import { Session } from './session';
+import { screenTestProviders } from '../core/screen-testing';
 
 const STATION = { id: 4, name: 'Press 1', kind: 'press' };
 const OPERATORS = [
@@ -35,11 +33,7 @@ describe('PinPad', () => {
     TestBed.configureTestingModule({
       imports: [PinPad],
       providers: [
-        provideZonelessChangeDetection(),
-        provideRouter([]),
-        provideHttpClient(),
-        provideHttpClientTesting(),
-        importProvidersFrom(MatIconTestingModule),
+        ...screenTestProviders(),
         { provide: BROWSER_STORAGE, useValue: storage },
       ],
     });

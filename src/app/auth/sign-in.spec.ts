@@ -1,14 +1,12 @@
 import { ComponentFixture, TestBed } from '@angular/core/testing';
-import { importProvidersFrom, provideZonelessChangeDetection } from '@angular/core';
-import { provideHttpClient } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
-import { Router, provideRouter } from '@angular/router';
-import { MatIconTestingModule } from '@angular/material/icon/testing';
+import { HttpTestingController } from '@angular/common/http/testing';
+import { Router } from '@angular/router';
 import { BROWSER_STORAGE } from '../core/browser-storage';
 import { MemoryStorage } from '../core/memory-storage';
 import { DEVICE_TOKEN_KEY } from './device-pairing';
 import { Session } from './session';
 import { SignIn } from './sign-in';
+import { screenTestProviders } from '../core/screen-testing';
 
 describe('SignIn', () => {
   let fixture: ComponentFixture<SignIn>;
@@ -20,11 +18,7 @@ describe('SignIn', () => {
     TestBed.configureTestingModule({
       imports: [SignIn],
       providers: [
-        provideZonelessChangeDetection(),
-        provideRouter([]),
-        provideHttpClient(),
-        provideHttpClientTesting(),
-        importProvidersFrom(MatIconTestingModule),
+        ...screenTestProviders(),
         { provide: BROWSER_STORAGE, useValue: storage },
       ],
     });

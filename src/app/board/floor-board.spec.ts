@@ -1,13 +1,10 @@
 import { ComponentFixture, TestBed } from '@angular/core/testing';
-import { importProvidersFrom, provideZonelessChangeDetection } from '@angular/core';
-import { provideHttpClient } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
-import { provideRouter } from '@angular/router';
-import { MatIconTestingModule } from '@angular/material/icon/testing';
+import { HttpTestingController } from '@angular/common/http/testing';
 import { BOARD_SOCKET } from './board-socket';
 import { BOARD_TIMING } from './board-timing';
 import { FakeBoardSocket, specBoard } from './board-testing';
 import { FloorBoard } from './floor-board';
+import { screenTestProviders } from '../core/screen-testing';
 
 describe('FloorBoard', () => {
   let fixture: ComponentFixture<FloorBoard>;
@@ -23,11 +20,7 @@ describe('FloorBoard', () => {
     TestBed.configureTestingModule({
       imports: [FloorBoard],
       providers: [
-        provideZonelessChangeDetection(),
-        provideRouter([]),
-        provideHttpClient(),
-        provideHttpClientTesting(),
-        importProvidersFrom(MatIconTestingModule),
+        ...screenTestProviders(),
         { provide: BOARD_SOCKET, useValue: () => socket },
         { provide: BOARD_TIMING, useValue: { refreshMs: 60_000, cycleMs: 60_000, signInRetryMs: 60_000 } },
       ],

@@ -1,12 +1,10 @@
 import { ComponentFixture, TestBed } from '@angular/core/testing';
-import { importProvidersFrom, provideZonelessChangeDetection } from '@angular/core';
-import { provideHttpClient } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
-import { Router, provideRouter } from '@angular/router';
-import { MatIconTestingModule } from '@angular/material/icon/testing';
+import { HttpTestingController } from '@angular/common/http/testing';
+import { Router } from '@angular/router';
 import type { FabricOption, FilmOption } from '../../shared/intake-contract';
 import { JobForm } from './job-form';
 import { READ_FILE_TEXT } from './file-text';
+import { screenTestProviders } from '../core/screen-testing';
 
 const FILMS: FilmOption[] = [
   { id: 2, filmTypeId: 1, filmTypeName: 'Smooth PU', colour: 'Navy', colourHex: '#1b2a4a', wearClass: 1 },
@@ -63,11 +61,7 @@ describe('JobForm', () => {
     TestBed.configureTestingModule({
       imports: [JobForm],
       providers: [
-        provideZonelessChangeDetection(),
-        provideRouter([]),
-        provideHttpClient(),
-        provideHttpClientTesting(),
-        importProvidersFrom(MatIconTestingModule),
+        ...screenTestProviders(),
         { provide: READ_FILE_TEXT, useValue: () => Promise.resolve(rosterText) },
       ],
     });

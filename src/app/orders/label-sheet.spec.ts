@@ -1,14 +1,11 @@
 import { ComponentFixture, TestBed } from '@angular/core/testing';
-import { importProvidersFrom, provideZonelessChangeDetection } from '@angular/core';
-import { provideHttpClient } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
-import { provideRouter } from '@angular/router';
-import { MatIconTestingModule } from '@angular/material/icon/testing';
+import { HttpTestingController } from '@angular/common/http/testing';
 import QRCode from 'qrcode';
 import type { BagSummary, OrderDetail } from '../../shared/intake-contract';
 import { LabelSheet } from './label-sheet';
 import { PRINT_PAGE } from './print-page';
 import { readDrawnQr } from './bag-qr-testing';
+import { screenTestProviders } from '../core/screen-testing';
 
 const TOKEN_A = 'a'.repeat(20) + '_' + 'B'.repeat(22);
 const TOKEN_B = 'c'.repeat(20) + '-' + 'D'.repeat(22);
@@ -77,11 +74,7 @@ describe('LabelSheet', () => {
     TestBed.configureTestingModule({
       imports: [LabelSheet],
       providers: [
-        provideZonelessChangeDetection(),
-        provideRouter([]),
-        provideHttpClient(),
-        provideHttpClientTesting(),
-        importProvidersFrom(MatIconTestingModule),
+        ...screenTestProviders(),
         { provide: PRINT_PAGE, useValue: print },
       ],
     });

@@ -1,10 +1,8 @@
 import { ComponentFixture, TestBed } from '@angular/core/testing';
-import { importProvidersFrom, provideZonelessChangeDetection } from '@angular/core';
-import { provideHttpClient } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
-import { Router, provideRouter } from '@angular/router';
-import { MatIconTestingModule } from '@angular/material/icon/testing';
+import { HttpTestingController } from '@angular/common/http/testing';
+import { Router } from '@angular/router';
 import { OrderForm } from './order-form';
+import { screenTestProviders } from '../core/screen-testing';
 
 describe('OrderForm', () => {
   let fixture: ComponentFixture<OrderForm>;
@@ -35,11 +33,7 @@ describe('OrderForm', () => {
     TestBed.configureTestingModule({
       imports: [OrderForm],
       providers: [
-        provideZonelessChangeDetection(),
-        provideRouter([]),
-        provideHttpClient(),
-        provideHttpClientTesting(),
-        importProvidersFrom(MatIconTestingModule),
+        ...screenTestProviders(),
       ],
     });
     http = TestBed.inject(HttpTestingController);

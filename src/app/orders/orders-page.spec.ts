@@ -1,11 +1,8 @@
 import { ComponentFixture, TestBed } from '@angular/core/testing';
-import { importProvidersFrom, provideZonelessChangeDetection } from '@angular/core';
-import { provideHttpClient } from '@angular/common/http';
-import { HttpTestingController, TestRequest, provideHttpClientTesting } from '@angular/common/http/testing';
-import { provideRouter } from '@angular/router';
-import { MatIconTestingModule } from '@angular/material/icon/testing';
+import { HttpTestingController, TestRequest } from '@angular/common/http/testing';
 import type { OrderListItem, OrderPage } from '../../shared/intake-contract';
 import { OrdersPage } from './orders-page';
+import { screenTestProviders } from '../core/screen-testing';
 
 const ORDER: OrderListItem = {
   id: 3,
@@ -42,11 +39,7 @@ describe('OrdersPage', () => {
     TestBed.configureTestingModule({
       imports: [OrdersPage],
       providers: [
-        provideZonelessChangeDetection(),
-        provideRouter([]),
-        provideHttpClient(),
-        provideHttpClientTesting(),
-        importProvidersFrom(MatIconTestingModule),
+        ...screenTestProviders(),
       ],
     });
     http = TestBed.inject(HttpTestingController);

@@ -1,10 +1,6 @@
 import 'fake-indexeddb/auto';
 import { ComponentFixture, TestBed } from '@angular/core/testing';
-import { importProvidersFrom, provideZonelessChangeDetection, signal } from '@angular/core';
-import { provideHttpClient } from '@angular/common/http';
-import { provideHttpClientTesting } from '@angular/common/http/testing';
-import { provideRouter } from '@angular/router';
-import { MatIconTestingModule } from '@angular/material/icon/testing';
+import { signal } from '@angular/core';
 import type { StationTicket } from '../../shared/events-contract';
 import type { StationKind } from '../../shared/names';
 import { Session } from '../auth/session';
@@ -12,6 +8,7 @@ import { STATION_DB, type StationDb } from '../sync/station-db';
 import { SyncService } from '../sync/sync-service';
 import { cacheTicket, freshStationDb, operatorSession, plainTicket, until } from '../sync/station-testing';
 import { PackCheck } from './pack-check';
+import { screenTestProviders } from '../core/screen-testing';
 
 /** A bag of 2 S and 3 M with every piece pressed, unless the counts say otherwise; spoils are per stage. */
 function pressedTicket(counts: { pressed?: number; packed?: number } = {}, spoiledAt: Partial<Record<StationKind, number>> = {}): StationTicket {
@@ -53,11 +50,7 @@ describe('PackCheck', () => {
     TestBed.configureTestingModule({
       imports: [PackCheck],
       providers: [
-        provideZonelessChangeDetection(),
-        provideRouter([]),
-        provideHttpClient(),
-        provideHttpClientTesting(),
-        importProvidersFrom(MatIconTestingModule),
+        ...screenTestProviders(),
         { provide: STATION_DB, useValue: db },
         { provide: Session, useValue: { ...operatorSession(), station: signal({ id: 4, name: 'Pack 1', kind: 'pack' as const }) } },
         { provide: SyncService, useValue: { nudge: jest.fn() } },

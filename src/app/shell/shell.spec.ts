@@ -1,12 +1,10 @@
 import { ComponentFixture, TestBed } from '@angular/core/testing';
-import { importProvidersFrom, provideZonelessChangeDetection } from '@angular/core';
-import { provideHttpClient } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
-import { Router, provideRouter } from '@angular/router';
-import { MatIconTestingModule } from '@angular/material/icon/testing';
+import { HttpTestingController } from '@angular/common/http/testing';
+import { Router } from '@angular/router';
 import { Role, Session } from '../auth/session';
 import { Shell } from './shell';
 import { navEntriesFor } from './nav-entries';
+import { screenTestProviders } from '../core/screen-testing';
 
 describe('Shell', () => {
   let fixture: ComponentFixture<Shell>;
@@ -17,11 +15,7 @@ describe('Shell', () => {
     TestBed.configureTestingModule({
       imports: [Shell],
       providers: [
-        provideZonelessChangeDetection(),
-        provideRouter([]),
-        provideHttpClient(),
-        provideHttpClientTesting(),
-        importProvidersFrom(MatIconTestingModule),
+        ...screenTestProviders(),
       ],
     });
     http = TestBed.inject(HttpTestingController);

@@ -1,16 +1,13 @@
 import 'fake-indexeddb/auto';
 import { ComponentFixture, TestBed } from '@angular/core/testing';
-import { importProvidersFrom, provideZonelessChangeDetection } from '@angular/core';
-import { provideHttpClient } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
-import { provideRouter } from '@angular/router';
-import { MatIconTestingModule } from '@angular/material/icon/testing';
+import { HttpTestingController } from '@angular/common/http/testing';
 import { Session } from '../auth/session';
 import type { SpoilReason } from '../../shared/events-contract';
 import { STATION_DB, type StationDb } from '../sync/station-db';
 import { SyncService } from '../sync/sync-service';
 import { cacheTicket, freshStationDb, operatorSession, plainTicket, until } from '../sync/station-testing';
 import { SpoilReport } from './spoil-report';
+import { screenTestProviders } from '../core/screen-testing';
 
 const REASONS: SpoilReason[] = [
   { id: 5, label: 'Film lifted after peel', position: 1, active: true },
@@ -30,11 +27,7 @@ describe('SpoilReport', () => {
     TestBed.configureTestingModule({
       imports: [SpoilReport],
       providers: [
-        provideZonelessChangeDetection(),
-        provideRouter([]),
-        provideHttpClient(),
-        provideHttpClientTesting(),
-        importProvidersFrom(MatIconTestingModule),
+        ...screenTestProviders(),
         { provide: STATION_DB, useValue: db },
         { provide: Session, useValue: operatorSession() },
         { provide: SyncService, useValue: { nudge: jest.fn() } },

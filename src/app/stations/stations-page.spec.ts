@@ -1,13 +1,10 @@
 import { ComponentFixture, TestBed } from '@angular/core/testing';
-import { importProvidersFrom, provideZonelessChangeDetection } from '@angular/core';
-import { provideHttpClient } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
-import { provideRouter } from '@angular/router';
-import { MatIconTestingModule } from '@angular/material/icon/testing';
+import { HttpTestingController } from '@angular/common/http/testing';
 import { BROWSER_STORAGE } from '../core/browser-storage';
 import { MemoryStorage } from '../core/memory-storage';
 import { DEVICE_TOKEN_KEY } from '../auth/device-pairing';
 import { StationsPage } from './stations-page';
+import { screenTestProviders } from '../core/screen-testing';
 
 const STATIONS = [
   { id: 1, name: 'Cutter A', kind: 'cut', paired: true, pairedAt: '2025-03-03T08:00:00Z', lastSeenAt: null },
@@ -33,11 +30,7 @@ describe('StationsPage', () => {
     TestBed.configureTestingModule({
       imports: [StationsPage],
       providers: [
-        provideZonelessChangeDetection(),
-        provideRouter([]),
-        provideHttpClient(),
-        provideHttpClientTesting(),
-        importProvidersFrom(MatIconTestingModule),
+        ...screenTestProviders(),
         { provide: BROWSER_STORAGE, useValue: storage },
       ],
     });

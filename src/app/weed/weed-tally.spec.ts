@@ -1,15 +1,11 @@
 import 'fake-indexeddb/auto';
 import { ComponentFixture, TestBed } from '@angular/core/testing';
-import { importProvidersFrom, provideZonelessChangeDetection } from '@angular/core';
-import { provideHttpClient } from '@angular/common/http';
-import { provideHttpClientTesting } from '@angular/common/http/testing';
-import { provideRouter } from '@angular/router';
-import { MatIconTestingModule } from '@angular/material/icon/testing';
 import { Session } from '../auth/session';
 import { STATION_DB, type StationDb } from '../sync/station-db';
 import { SyncService } from '../sync/sync-service';
 import { cacheTicket, freshStationDb, operatorSession, plainTicket, until } from '../sync/station-testing';
 import { WeedTally } from './weed-tally';
+import { screenTestProviders } from '../core/screen-testing';
 
 describe('WeedTally', () => {
   let db: StationDb;
@@ -21,11 +17,7 @@ describe('WeedTally', () => {
     TestBed.configureTestingModule({
       imports: [WeedTally],
       providers: [
-        provideZonelessChangeDetection(),
-        provideRouter([]),
-        provideHttpClient(),
-        provideHttpClientTesting(),
-        importProvidersFrom(MatIconTestingModule),
+        ...screenTestProviders(),
         { provide: STATION_DB, useValue: db },
         { provide: Session, useValue: operatorSession() },
         { provide: SyncService, useValue: { nudge: jest.fn() } },
