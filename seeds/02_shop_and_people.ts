@@ -18,6 +18,7 @@ export async function seed(knex: Knex): Promise<void> {
     bag_max_pieces: 24,
     shift_start: '07:00:00',
     shift_end: '15:30:00',
+    working_days: '1,2,3,4,5',
     standard_pieces_per_hour: 40,
     heat_exposure_limit_s: 45,
   });

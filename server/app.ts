@@ -41,6 +41,7 @@ import { ShiftSummaryScheduler } from './mail/shift-summary-scheduler';
 import { OrderReadiness } from './orders/order-readiness';
 import { RollLowNotice } from './rolls/roll-low-notice';
 import { reportsRouter } from './reports/reports-router';
+import { shopRouter } from './shop/shop-router';
 
 /** What the hub needs from outside to build its app. */
 export interface AppDeps {
@@ -120,6 +121,7 @@ export function createApp({ db, env, sessionSecret, logger, browserDist }: AppDe
   api.use('/auth', authRouter(db, env));
   api.use('/stations', stationsRouter(db));
   api.use('/displays', displaysRouter(db));
+  api.use('/shop', shopRouter(db, floor));
   api.use('/people', peopleRouter(db));
   api.use('/customers', customersRouter(db));
   api.use('/orders', ordersRouter(db));

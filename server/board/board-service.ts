@@ -6,6 +6,7 @@ import { shiftSoFarWindow } from '../../src/shared/floor/station-rate';
 import { HOUR_MS, type FloorBag, type FloorEvent, type FloorShift } from '../../src/shared/floor/floor-types';
 import { nextShift, shiftWindow } from '../../src/shared/floor/shift-window';
 import { shiftWorkingHours, type AddWorkingHours } from '../../src/shared/floor/working-time';
+import { parseWorkingDays } from '../../src/shared/shop-contract';
 import { BagsRepository, type SpoiledAtByBag } from '../bags/bags-repository';
 import type { Db, ShopSettingsRow, StationRow } from '../db/tables';
 import { HttpError } from '../http/http-error';
@@ -74,15 +75,19 @@ export class BoardService {
   }
 }
 
-/** The shift on the floor, the shift takt plans for (the next one once it has ended), and the shop's working hours. */
+/**
+ * The shift on the floor (any day: work done on a day off still shows), the shift takt plans for (the next
+ * working day's once it has ended), and the shop's working hours (its working days' shifts only).
+ */
 function shopTime(now: Date, settings: ShopSettingsRow): { shift: FloorShift; planShift: FloorShift; addWorkingHours: AddWorkingHours } {
   const { time_zone: zone, shift_start: start, shift_end: end } = settings;
+  const workingDays = parseWorkingDays(settings.working_days);
   try {
     const shift = shiftWindow(now, zone, start, end);
     return {
       shift,
-      planShift: now.getTime() < Date.parse(shift.endAt) ? shift : nextShift(now, zone, start, end),
-      addWorkingHours: shiftWorkingHours(zone, start, end),
+      planShift: now.getTime() < Date.parse(shift.endAt) ? shift : nextShift(now, zone, start, end, workingDays),
+      addWorkingHours: shiftWorkingHours(zone, start, end, workingDays),
     };
   } catch (error) {
     if (!(error instanceof RangeError)) throw error;

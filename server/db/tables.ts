@@ -13,6 +13,8 @@ export interface ShopSettingsRow {
   bag_max_pieces: number;
   shift_start: string;
   shift_end: string;
+  /** ISO weekday numbers the shift runs on, e.g. '1,2,3,4,5' (see src/shared/shop-contract.ts). */
+  working_days: string;
   standard_pieces_per_hour: number;
   heat_exposure_limit_s: number;
   updated_at: Date;

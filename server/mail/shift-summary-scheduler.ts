@@ -1,7 +1,8 @@
 import type { Logger } from 'pino';
 import type { BoardReply } from '../../src/shared/board-contract';
-import { localDate, shiftWindow } from '../../src/shared/floor/shift-window';
+import { localDate, shiftWindow, worksOn } from '../../src/shared/floor/shift-window';
 import type { MailSummary } from '../../src/shared/mail-contract';
+import { parseWorkingDays } from '../../src/shared/shop-contract';
 import type { Db } from '../db/tables';
 import { conflict } from '../http/http-error';
 import { toMailSummary } from './mail-log-view';
@@ -27,15 +28,23 @@ export function endedShift(now: Date, timeZone: string, shiftStart: string, shif
   return candidates[0] ?? null;
 }
 
+/** Whether the board shows anything done in its shift: good pieces at a station or a spoil reported. */
+export function workRecorded(board: BoardReply): boolean {
+  return board.stations.some((station) => station.shiftPieces > 0) || board.spoilReasons.length > 0;
+}
+
 /**
  * The owner's end-of-shift summary: each minute it looks whether the shop's shift has ended and no
- * summary for that shift exists yet, then queues one to every active owner. A lead can also ask for
+ * summary for that shift exists yet, then queues one to every active owner. A shift on a day the shop
+ * does not work gets one only when work was recorded in it (someone came in). A lead can also ask for
  * the shift so far at any time.
  */
 export class ShiftSummaryScheduler {
   private readonly repository: MailRepository;
   private timer: NodeJS.Timeout | null = null;
   private checking: Promise<number> | null = null;
+  /** The last ended shift on a day off found with no work: its events are stored, so it stays quiet. */
+  private quietShift: string | null = null;
 
   constructor(
     private readonly db: Db,
@@ -72,7 +81,7 @@ export class ShiftSummaryScheduler {
   async sendNow(now = new Date()): Promise<MailSummary> {
     const shop = await this.repository.shop();
     const shift = shiftWindow(now, shop.time_zone, shop.shift_start, shop.shift_end);
-    const ids = await this.queue(localDate(new Date(shift.startAt), shop.time_zone), false, now);
+    const ids = await this.queue(localDate(new Date(shift.startAt), shop.time_zone), false, await this.numbersAt(now));
     if (ids.length === 0) throw conflict('No active owner has an e-mail address to send the summary to. Add one on the People screen.');
     return toMailSummary((await this.repository.find(ids[0]!))!);
   }
@@ -81,12 +90,20 @@ export class ShiftSummaryScheduler {
     const shop = await this.repository.shop();
     const ended = endedShift(now, shop.time_zone, shop.shift_start, shop.shift_end);
     if (!ended || (await this.repository.hasShiftSummary(ended.shiftDate))) return 0;
+    const workingDay = worksOn(parseWorkingDays(shop.working_days))(ended.shiftDate);
+    const key = `${ended.shiftDate} ${ended.endAt.toISOString()}`;
+    if (!workingDay && this.quietShift === key) return 0;
     // The numbers as they stood a moment before the end, so the ended shift is still the board's shift.
-    return (await this.queue(ended.shiftDate, true, new Date(ended.endAt.getTime() - 1))).length;
+    const board = await this.numbersAt(new Date(ended.endAt.getTime() - 1));
+    if (!workingDay && !workRecorded(board)) {
+      // Events are stamped when the hub stores them, so none can join a shift that has ended: no need to look again each minute.
+      this.quietShift = key;
+      return 0;
+    }
+    return (await this.queue(ended.shiftDate, true, board)).length;
   }
 
-  private async queue(shiftDate: string, final: boolean, at: Date): Promise<number[]> {
-    const board = await this.numbersAt(at);
+  private async queue(shiftDate: string, final: boolean, board: BoardReply): Promise<number[]> {
     const ids = await this.db.transaction(async (trx) => {
       const repository = new MailRepository(trx);
       // Holding the shop's row lets only one hub process queue an ended shift's summary; the next one finds it queued.

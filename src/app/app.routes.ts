@@ -153,6 +153,14 @@ export const routes: Routes = [
         data: { roles: ['owner', 'lead'] satisfies Role[] },
         loadComponent: () => import('./recipes/recipe-book').then((m) => m.RecipeBook),
       },
+      {
+        // A lead reads the settings here by the page's address; only the owner changes them.
+        path: 'shop-settings',
+        title: 'Shop settings · Dwell',
+        canActivate: [roleGuard],
+        data: { roles: ['owner', 'lead'] satisfies Role[] },
+        loadComponent: () => import('./shop/shop-settings-page').then((m) => m.ShopSettingsPage),
+      },
     ],
   },
   { path: '**', redirectTo: '' },

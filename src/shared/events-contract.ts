@@ -73,7 +73,7 @@ export interface SpoilReason {
   active: boolean;
 }
 
-/** What the hub broadcasts to the floor board after a batch changed bags. */
+/** What the hub broadcasts to the floor board after a batch changed bags, or with no bag ids after the shop's settings changed. */
 export interface BoardUpdate {
   bagIds: number[];
   at: string;

@@ -24,14 +24,14 @@ describe('order ETA from the bottleneck stage', () => {
   });
 
   it('counts the ETA in working hours: work that does not fit today waits for tomorrow\'s shift', () => {
-    // Worked by hand: shift 07:00-15:30 in London (GMT on 2 March 2026); now 14:30; 100 pieces to pack at the
+    // Worked by hand: shift 07:00-15:30 Monday to Friday in London (GMT on Monday 2 March 2026); now 14:30; 100 pieces to pack at the
     // standard 50/h = 2 h: 1 h today to 15:30, 1 h from 07:00 tomorrow -> 08:00 on 3 March. Due 18:00 today:
     // by clock hours it would be on time (16:30), in working hours it is at risk.
     const order = [{ id: 3, code: 'C', dueAt: '2026-03-02T18:00:00Z' }];
     const bags = [bag(3, 3, 100, [100, 100, 100, 0])];
     const now = Date.parse('2026-03-02T14:30:00Z');
     expect(orderEtas(order, bags, observed, 50, now)[0]).toMatchObject({ eta: '2026-03-02T16:30:00.000Z', atRisk: false });
-    const [eta] = orderEtas(order, bags, observed, 50, now, shiftWorkingHours('Europe/London', '07:00', '15:30'));
+    const [eta] = orderEtas(order, bags, observed, 50, now, shiftWorkingHours('Europe/London', '07:00', '15:30', [1, 2, 3, 4, 5]));
     expect(eta).toMatchObject({ eta: '2026-03-03T08:00:00.000Z', atRisk: true });
   });
 

@@ -1,4 +1,5 @@
-import { isRealDay, localDate, localDaySpan, localDaysBetween, parseClock, shiftWindow } from '../../src/shared/floor/shift-window';
+import { isoWeekdayOf, isRealDay, localDate, localDaySpan, localDaysBetween, parseClock, shiftWindow, worksOn } from '../../src/shared/floor/shift-window';
+import { WEEKDAY_NAMES } from '../../src/shared/shop-contract';
 
 const HOUR_MS = 3_600_000;
 const LONDON = 'Europe/London';
@@ -116,5 +117,37 @@ describe('local calendar days for the reports', () => {
     expect(isRealDay('2026-02-29')).toBe(false);
     expect(isRealDay('2026-13-01')).toBe(false);
     expect(isRealDay('2026-3-1')).toBe(false);
+  });
+});
+
+describe('ISO 8601 weekdays of calendar days', () => {
+  /** The weekday Node's Intl.DateTimeFormat (ICU data) gives for noon of a day in the zone: an independent reference. */
+  const intlWeekday = (day: string, timeZone: string) => new Intl.DateTimeFormat('en-GB', { timeZone, weekday: 'long' }).format(new Date(`${day}T12:00:00Z`));
+
+  it('numbers Monday 1 to Sunday 7 as ISO 8601 does', () => {
+    // ISO 8601's own example (from memory): calendar date 1985-04-12 is week date 1985-W15-5, a Friday.
+    expect(isoWeekdayOf('1985-04-12')).toBe(5);
+    expect(intlWeekday('1985-04-12', 'UTC')).toBe('Friday');
+    expect(isoWeekdayOf('2026-01-18')).toBe(7);
+    expect(intlWeekday('2026-01-18', 'Europe/London')).toBe('Sunday');
+  });
+
+  it('agrees with Intl.DateTimeFormat on every day of three years, a leap day and both clock changes included', () => {
+    // Noon UTC falls on the same calendar day in London, summer or winter.
+    const days = localDaysBetween('2026-01-01', '2028-12-31');
+    expect(days).toHaveLength(365 + 365 + 366);
+    for (const day of days) expect(WEEKDAY_NAMES[isoWeekdayOf(day)]).toBe(intlWeekday(day, 'Europe/London'));
+  });
+
+  it('tells working days from days off, and reads no working days as every day', () => {
+    const weekdays = worksOn([1, 2, 3, 4, 5]);
+    expect(weekdays('2026-01-16')).toBe(true);
+    expect(weekdays('2026-01-17')).toBe(false);
+    expect(weekdays('2026-01-18')).toBe(false);
+    expect(worksOn([])('2026-01-17')).toBe(true);
+  });
+
+  it('refuses a day that does not exist', () => {
+    expect(() => isoWeekdayOf('2026-02-29')).toThrow('"2026-02-29" is not a calendar date');
   });
 });

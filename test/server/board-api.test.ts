@@ -1,6 +1,8 @@
 import request from 'supertest';
 import type { BoardReply } from '../../src/shared/board-contract';
+import { isoWeekdayOf, localDate } from '../../src/shared/floor/shift-window';
 import { newBagToken } from '../../src/shared/intake/bag-token';
+import { ISO_WEEKDAYS, workingDaysText } from '../../src/shared/shop-contract';
 import type { RunningHub } from '../../server/hub';
 import type { ShopSettingsRow } from '../../server/db/tables';
 import { signedInDisplay } from './support/test-hub';
@@ -27,8 +29,8 @@ beforeAll(async () => {
   saved = (await hub.db('shop_settings').where({ id: 1 }).first())!;
 });
 afterAll(async () => {
-  const { shift_start, shift_end, standard_pieces_per_hour, time_zone } = saved;
-  await hub.db('shop_settings').where({ id: 1 }).update({ shift_start, shift_end, standard_pieces_per_hour, time_zone });
+  const { shift_start, shift_end, standard_pieces_per_hour, time_zone, working_days } = saved;
+  await hub.db('shop_settings').where({ id: 1 }).update({ shift_start, shift_end, standard_pieces_per_hour, time_zone, working_days });
   // Later test files on this database should not find these invented orders open.
   if (madeOrders.length > 0) await hub.db('orders').whereIn('id', madeOrders).update({ status: 'cancelled' });
   await hub.close();
@@ -39,8 +41,9 @@ const londonClock = (at: Date) =>
 
 /**
  * Starts a shift at a whole second at least a second ahead (London wall clock) with a standard rate of 40 pieces
- * an hour. It runs for a day less one second, so the break before it is one second and the shift opens half a
- * second before its start: events of earlier tests, all older than that, stay out of its numbers.
+ * an hour, worked every day of the week (so the tests pass whatever day they run on). It runs for a day less one
+ * second, so the break before it is one second and the shift opens half a second before its start: events of
+ * earlier tests, all older than that, stay out of its numbers.
  */
 async function freshShift(): Promise<void> {
   const start = new Date(Math.ceil((Date.now() + 1000) / 1000) * 1000);
@@ -48,6 +51,7 @@ async function freshShift(): Promise<void> {
     time_zone: TIME_ZONE,
     shift_start: londonClock(start),
     shift_end: londonClock(new Date(start.getTime() - 1000)),
+    working_days: workingDaysText(ISO_WEEKDAYS),
     standard_pieces_per_hour: 40,
   });
   await new Promise((resolve) => setTimeout(resolve, start.getTime() - Date.now() + 20));
@@ -152,6 +156,31 @@ describe('GET /api/board', () => {
     // Only the order due within the shift adds to today's due pieces; takt = seconds left in the shift / pieces due.
     expect(reply.piecesDueToday - before.piecesDueToday).toBe(20);
     expect(reply.taktS).toBeCloseTo((Date.parse(reply.shift.endAt) - Date.parse(reply.generatedAt)) / 1000 / reply.piecesDueToday, 6);
+  });
+
+  it('counts an order\'s ETA in the shifts of the shop\'s working days only', async () => {
+    await freshShift();
+    await hub.db('shop_settings').where({ id: 1 }).update({ standard_pieces_per_hour: 1 });
+    const tag = String(Math.floor(Math.random() * 1e6));
+    const order = await orderOfOneBag(`W${tag}`, new Date(Date.now() + 3 * 24 * HOUR_MS), 30);
+
+    // By hand: 30 pieces at the standard 1 piece an hour = 30 h at the bottleneck. Worked every day, the shift of a day
+    // less one second gives about 24 h today and the rest tomorrow: ETA about 30 h away (an hour either way if the
+    // clocks change), before the due time 3 days away.
+    const everyDay = (await board()).orders.find((o) => o.id === order)!;
+    const everyDayHours = (Date.parse(everyDay.etaAt!) - Date.now()) / HOUR_MS;
+    expect(everyDayHours).toBeGreaterThan(28.9);
+    expect(everyDayHours).toBeLessThan(31.1);
+    expect(everyDay.atRisk).toBe(false);
+
+    // Working only on the weekday this shift started on, the last 6 h wait a week for that weekday's next shift.
+    const shiftDay = localDate(new Date((await board()).shift.startAt), TIME_ZONE);
+    await hub.db('shop_settings').where({ id: 1 }).update({ working_days: String(isoWeekdayOf(shiftDay)) });
+    const oneDay = (await board()).orders.find((o) => o.id === order)!;
+    const oneDayHours = (Date.parse(oneDay.etaAt!) - Date.now()) / HOUR_MS;
+    expect(oneDayHours).toBeGreaterThan(7 * 24 + 4.9);
+    expect(oneDayHours).toBeLessThan(7 * 24 + 7.1);
+    expect(oneDay.atRisk).toBe(true);
   });
 
   it('lists a roll below its reorder length in inches, and leaves out full and emptied rolls', async () => {

@@ -8,10 +8,12 @@ import { OrderReadiness } from '../../server/orders/order-readiness';
 import type { RunningHub } from '../../server/hub';
 import { ShiftSummaryScheduler, endedShift } from '../../server/mail/shift-summary-scheduler';
 import type { SmtpSink } from '../../server/mail/smtp-sink';
-import { shiftWindow } from '../../src/shared/floor/shift-window';
+import { isoWeekdayOf, localDate, shiftWindow } from '../../src/shared/floor/shift-window';
+import { ISO_WEEKDAYS, workingDaysText } from '../../src/shared/shop-contract';
+import type { ShopSettingsRow } from '../../server/db/tables';
 import { DEMO_ACCOUNTS } from '../../seeds/data/demo-accounts';
 import { cutWorld } from './cut-fixtures';
-import { leadCookie, operatorOn, startTestHub, stationEvent } from './events-fixtures';
+import { freshBag, leadCookie, operatorOn, startTestHub, stationEvent } from './events-fixtures';
 import { parsed, pressedOrder, to, waitForMail, waitForRow } from './mail-fixtures';
 
 let hub: RunningHub;
@@ -141,7 +143,49 @@ describe('film running low', () => {
 });
 
 describe('the end-of-shift summary', () => {
+  // These tests set the shop's working days and shift they need, so they pass on any day of the week, and put the settings back.
+  let saved: ShopSettingsRow;
+  beforeAll(async () => {
+    saved = (await hub.db('shop_settings').where({ id: 1 }).first())!;
+  });
+  afterEach(async () => {
+    const { time_zone, shift_start, shift_end, working_days } = saved;
+    await hub.db('shop_settings').where({ id: 1 }).update({ time_zone, shift_start, shift_end, working_days });
+  });
+  const workEveryDay = () => hub.db('shop_settings').where({ id: 1 }).update({ working_days: workingDaysText(ISO_WEEKDAYS) });
+  const summariesOf = (shiftDate: string) => hub.db('mail_log').where({ kind: 'shift_summary' }).whereRaw("JSON_UNQUOTE(JSON_EXTRACT(related, '$.shiftDate')) = ?", [shiftDate]);
+  const londonClock = (at: Date) => new Intl.DateTimeFormat('en-GB', { timeZone: 'Europe/London', hour: '2-digit', minute: '2-digit', second: '2-digit', hourCycle: 'h23' }).format(at);
+
+  /**
+   * Starts a shift a second from now that runs a day less one second (London wall clock), on a day the shop does
+   * not work: it opens half a second before its start, so no earlier test's events count as work in it. Answers
+   * the shift's day and a moment a minute after it ends.
+   */
+  async function freshShiftOnDayOff(): Promise<{ shiftDate: string; afterEnd: Date }> {
+    const start = new Date(Math.ceil((Date.now() + 1000) / 1000) * 1000);
+    const shiftDate = localDate(start, 'Europe/London');
+    const dayOff = isoWeekdayOf(shiftDate);
+    await hub.db('shop_settings').where({ id: 1 }).update({
+      time_zone: 'Europe/London',
+      shift_start: londonClock(start),
+      shift_end: londonClock(new Date(start.getTime() - 1000)),
+      working_days: workingDaysText(ISO_WEEKDAYS.filter((day) => day !== dayOff)),
+    });
+    await new Promise((resolve) => setTimeout(resolve, start.getTime() - Date.now() + 20));
+    const shop = (await hub.db('shop_settings').where({ id: 1 }).first())!;
+    const shift = shiftWindow(new Date(), shop.time_zone, shop.shift_start, shop.shift_end);
+    expect(shift.startAt).toBe(start.toISOString());
+    await summariesOf(shiftDate).delete();
+    return { shiftDate, afterEnd: new Date(Date.parse(shift.endAt) + 60_000) };
+  }
+
+  const newScheduler = () => {
+    const board = new BoardService(hub.db);
+    return new ShiftSummaryScheduler(hub.db, hub.mail, (now) => board.board(now), pino({ level: 'silent' }));
+  };
+
   it("is queued once to every active owner after the shop's shift ends, and not again on the next check", async () => {
+    await workEveryDay();
     const shop = (await hub.db('shop_settings').where({ id: 1 }).first())!;
     const shift = shiftWindow(new Date(), shop.time_zone, shop.shift_start, shop.shift_end);
     const afterEnd = new Date(new Date(shift.endAt).getTime() + 60_000);
@@ -164,6 +208,7 @@ describe('the end-of-shift summary', () => {
   });
 
   it('is queued once when two hub processes look at the same moment', async () => {
+    await workEveryDay();
     const shop = (await hub.db('shop_settings').where({ id: 1 }).first())!;
     const afterEnd = new Date(new Date(shiftWindow(new Date(), shop.time_zone, shop.shift_start, shop.shift_end).endAt).getTime() + 120_000);
     const ended = endedShift(afterEnd, shop.time_zone, shop.shift_start, shop.shift_end)!;
@@ -177,6 +222,30 @@ describe('the end-of-shift summary', () => {
 
     expect(queued.reduce((a, b) => a + b, 0)).toBe(owners.length);
     expect(await summaries()).toHaveLength(owners.length);
+  });
+
+  it('is not queued for a quiet shift on a day the shop does not work, and is once that day is a working day', async () => {
+    const { shiftDate, afterEnd } = await freshShiftOnDayOff();
+    const owners = await hub.db('users').where({ role: 'owner', active: true }).whereNotNull('email');
+
+    expect(await newScheduler().check(afterEnd)).toBe(0);
+    expect(await summariesOf(shiftDate)).toHaveLength(0);
+
+    // The same quiet shift on a working day still gets its summary: the day off is what kept it back.
+    await workEveryDay();
+    expect(await newScheduler().check(afterEnd)).toBe(owners.length);
+    expect(await summariesOf(shiftDate)).toHaveLength(owners.length);
+  });
+
+  it('is queued for a shift on a day off when someone recorded one piece in it', async () => {
+    const { shiftDate, afterEnd } = await freshShiftOnDayOff();
+    const owners = await hub.db('users').where({ role: 'owner', active: true }).whereNotNull('email');
+    const cutter = await operatorOn(hub.url, hub.db, 'Cut 1', 1);
+    const bag = await freshBag(hub.db, 1);
+    await request(hub.url).post('/api/events').set('Cookie', cutter.cookie).send({ events: [stationEvent({ bagId: bag.id, stationId: cutter.stationId, userId: cutter.userId }, 'cut_done', 1)] }).expect(200);
+
+    expect(await newScheduler().check(afterEnd)).toBe(owners.length);
+    expect(await summariesOf(shiftDate)).toHaveLength(owners.length);
   });
 
   it('goes to the owner at once when a lead asks for the shift so far', async () => {

@@ -42,6 +42,7 @@ describe('FloorBoard', () => {
     expect(connection()).toMatch(/^Live · updated \d\d:\d\d$/);
     expect(page().querySelector('dw-board-view')).not.toBeNull();
     expect(page().querySelector('dw-board-view.wall')).toBeNull();
+    expect(page().querySelector('[data-testid=board-shift]')?.textContent?.trim()).toBe('Shift 07:00–15:30');
   });
 
   it('moves a number on the board when the hub announces an update, with no reload', async () => {

@@ -1,5 +1,6 @@
 import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
 import { MatIconModule } from '@angular/material/icon';
+import { clock } from './board-format';
 import { BoardConnection } from './board-connection';
 import { BoardLive } from './board-live';
 import { BoardView } from './board-view';
@@ -15,6 +16,7 @@ import { BoardView } from './board-view';
 })
 export class FloorBoard {
   protected readonly live = inject(BoardLive);
+  protected readonly clock = clock;
 
   constructor() {
     this.live.start();

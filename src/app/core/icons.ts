@@ -78,6 +78,7 @@ import refresh from '@material-symbols/svg-400/rounded/refresh.svg';
 import send from '@material-symbols/svg-400/rounded/send.svg';
 import article from '@material-symbols/svg-400/rounded/article.svg';
 import visibility from '@material-symbols/svg-400/rounded/visibility.svg';
+import store from '@material-symbols/svg-400/rounded/store.svg';
 
 /** Every icon the app shows, by the name templates use in `svgIcon`. Only these are bundled. */
 const ICONS: Readonly<Record<string, string>> = {
@@ -159,6 +160,7 @@ const ICONS: Readonly<Record<string, string>> = {
   send,
   article,
   visibility,
+  'shop-settings': store,
 };
 
 /** Registers Dwell's bundled SVG icons; nothing is fetched at run time. */

@@ -27,6 +27,8 @@ export const NAV_ENTRIES: readonly NavEntry[] = [
   { path: '/press', label: 'Press card', icon: 'station-press', roles: ['operator'], stationKinds: ['press'] },
   { path: '/recipes', label: 'Recipe book', icon: 'recipe-book', roles: ['owner', 'lead'] },
   { path: '/people', label: 'People', icon: 'people', roles: ['owner', 'lead'] },
+  // The lead's top bar is full; a lead reaches the read-only Shop settings by its address.
+  { path: '/shop-settings', label: 'Shop settings', icon: 'shop-settings', roles: ['owner'] },
   { path: '/reports', label: 'Reports', icon: 'reports', roles: ['owner', 'lead'] },
   { path: '/mail', label: 'Mail outbox', icon: 'mail-outbox', roles: ['owner', 'lead'] },
 ];

@@ -43,10 +43,10 @@ describe('Shell', () => {
     expect(navLabels()).toEqual(['Floor board', 'Orders', 'Stations', 'Gang planner', 'Roll rack', 'Recipe book', 'People', 'Reports', 'Mail outbox']);
   });
 
-  it('offers an owner the office screens, People included', async () => {
+  it('offers an owner the office screens, People and Shop settings included', async () => {
     await renderSignedInAs('owner');
 
-    expect(navLabels()).toEqual(['Floor board', 'Orders', 'Stations', 'Gang planner', 'Roll rack', 'Recipe book', 'People', 'Reports', 'Mail outbox']);
+    expect(navLabels()).toEqual(['Floor board', 'Orders', 'Stations', 'Gang planner', 'Roll rack', 'Recipe book', 'People', 'Shop settings', 'Reports', 'Mail outbox']);
   });
 
   it('offers the Cut station, Gang planner and Roll rack to an operator only at a cut station', () => {

@@ -1,4 +1,5 @@
 import { TZDate } from '@date-fns/tz';
+import type { IsoWeekday } from '../shop-contract';
 import type { FloorShift } from './floor-types';
 
 /** A span of local time given as ISO 8601 instants: start included, end excluded. */
@@ -90,13 +91,37 @@ export function shiftOnDay(day: string, timeZone: string, shiftStart: string, sh
   return { startAt: startAt.toISOString(), endAt: endAt.toISOString() };
 }
 
-/** The next shift to start after `now` (for planning the day ahead once the current one has ended). */
-export function nextShift(now: Date, timeZone: string, shiftStart: string, shiftEnd: string): FloorShift {
+/**
+ * The next shift on a working day to start after `now` (for planning the day ahead once the current one
+ * has ended). No working days at all is read as every day.
+ */
+export function nextShift(now: Date, timeZone: string, shiftStart: string, shiftEnd: string, workingDays: readonly IsoWeekday[]): FloorShift {
   checkTimeZone(timeZone);
+  const works = worksOn(workingDays);
   const today = localDate(now, timeZone);
-  const todays = shiftOnDay(today, timeZone, shiftStart, shiftEnd);
-  const shift = Date.parse(todays.startAt) > now.getTime() ? todays : shiftOnDay(addDays(today, 1), timeZone, shiftStart, shiftEnd);
-  return { ...shift, now: now.toISOString() };
+  // Eight days from today reach the next working day's shift even when today's has already started.
+  for (let offset = 0; offset <= 7; offset++) {
+    const day = addDays(today, offset);
+    if (!works(day)) continue;
+    const shift = shiftOnDay(day, timeZone, shiftStart, shiftEnd);
+    if (Date.parse(shift.startAt) > now.getTime()) return { ...shift, now: now.toISOString() };
+  }
+  throw new RangeError('The shop has no working day on which a shift could start.');
+}
+
+/** The ISO 8601 weekday of a calendar day 'YYYY-MM-DD' (1 Monday to 7 Sunday), by calendar arithmetic. */
+export function isoWeekdayOf(day: string): IsoWeekday {
+  const { year, month, date } = parseDay(day);
+  // A calendar date's weekday is the same in every zone: read it in UTC, where a day is always 24 hours.
+  const sundayIsZero = new Date(Date.UTC(year, month, date)).getUTCDay();
+  return (sundayIsZero === 0 ? 7 : sundayIsZero) as IsoWeekday;
+}
+
+/** Whether a shift starting on a calendar day runs, given the shop's working days; none at all is read as every day. */
+export function worksOn(workingDays: readonly IsoWeekday[]): (day: string) => boolean {
+  if (workingDays.length === 0) return () => true;
+  const days = new Set(workingDays);
+  return (day) => days.has(isoWeekdayOf(day));
 }
 
 function wallClock(year: number, month: number, date: number, hours: number, minutes: number, seconds: number, timeZone: string): Date {

@@ -1,4 +1,5 @@
-import { addDays, localDate, shiftOnDay } from './shift-window';
+import type { IsoWeekday } from '../shop-contract';
+import { addDays, localDate, shiftOnDay, worksOn } from './shift-window';
 import { HOUR_MS } from './floor-types';
 
 /** Adds hours of work to a time, counting only the hours inside shifts; answers epoch milliseconds. */
@@ -11,17 +12,21 @@ export const addClockHours: AddWorkingHours = (fromMs, hours) => fromMs + hours 
 const MAX_DAYS = 400;
 
 /**
- * Working time for a shop that runs one shift a day, every day, from `shiftStart` to `shiftEnd` in its
- * time zone: work left at the end of a shift carries over to the next shift's start. Days are stepped
- * as local calendar days, so a shift on the day the clocks change keeps its wall-clock times.
+ * Working time for a shop that runs one shift a day on its working days, from `shiftStart` to `shiftEnd`
+ * in its time zone: work left at the end of a shift carries over to the next working day's shift start.
+ * A shift belongs to the day it starts on (an overnight shift from Friday night runs into Saturday).
+ * Days are stepped as local calendar days, so a shift on the day the clocks change keeps its wall-clock
+ * times. No working days at all is read as every day.
  */
-export function shiftWorkingHours(timeZone: string, shiftStart: string, shiftEnd: string): AddWorkingHours {
+export function shiftWorkingHours(timeZone: string, shiftStart: string, shiftEnd: string, workingDays: readonly IsoWeekday[]): AddWorkingHours {
+  const works = worksOn(workingDays);
   return (fromMs, hours) => {
     let left = hours * HOUR_MS;
     let at = fromMs;
     // Start a day early: an overnight shift that began yesterday may still be running.
     let day = addDays(localDate(new Date(fromMs), timeZone), -1);
     for (let i = 0; i < MAX_DAYS; i++, day = addDays(day, 1)) {
+      if (!works(day)) continue;
       const shift = shiftOnDay(day, timeZone, shiftStart, shiftEnd);
       const endMs = Date.parse(shift.endAt);
       if (endMs <= at) continue;
