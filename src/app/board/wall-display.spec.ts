@@ -40,7 +40,7 @@ describe('WallDisplay', () => {
         importProvidersFrom(MatIconTestingModule),
         { provide: BROWSER_STORAGE, useValue: storage },
         { provide: BOARD_SOCKET, useValue: () => socket },
-        { provide: BOARD_TIMING, useValue: { refreshMs: 60_000, cycleMs: 40, signInRetryMs: 40 } },
+        { provide: BOARD_TIMING, useValue: { refreshMs: 60_000, cycleMs: 250, signInRetryMs: 40 } },
       ],
     });
     http = TestBed.inject(HttpTestingController);
@@ -189,7 +189,7 @@ describe('WallDisplay', () => {
     expect(view()).toBe('The floor now');
     expect(page().querySelector('dw-stage-columns')).not.toBeNull();
 
-    for (let waited = 0; view() === 'The floor now' && waited < 1000; waited += 5) {
+    for (let waited = 0; view() === 'The floor now' && waited < 3000; waited += 5) {
       await new Promise((resolve) => setTimeout(resolve, 5));
       await settle();
     }

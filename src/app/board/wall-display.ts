@@ -88,7 +88,8 @@ export class WallDisplay {
     this.screenResized();
     this.fitViews();
     const cycle = setInterval(() => {
-      if (this.cycling()) this.viewIndex.update((index) => (index + 1) % VIEWS.length);
+      // Views turn only once the board shows, so it always opens on the first one.
+      if (this.cycling() && this.state().status === 'showing') this.viewIndex.update((index) => (index + 1) % VIEWS.length);
     }, this.timing.cycleMs);
     // The hub forgot this screen's session (it expires after some hours): sign in again with the kept token.
     effect(() => {
