@@ -32,9 +32,9 @@ describe('RecipeBook', () => {
   let http: HttpTestingController;
   let storage: MemoryStorage;
 
-  async function open(units: 'imperial' | 'metric'): Promise<HTMLElement> {
+  async function open(units: 'imperial' | 'metric' | null): Promise<HTMLElement> {
     storage = new MemoryStorage();
-    storage.setItem('dwell.recipes.units', units);
+    if (units) storage.setItem('dwell.recipes.units', units);
     TestBed.configureTestingModule({
       imports: [RecipeBook],
       providers: [
@@ -78,6 +78,17 @@ describe('RecipeBook', () => {
     const cell = root.querySelector('td.temp')?.textContent ?? '';
     expect(cell).toContain('302 °F'); // 150 °C × 1.8 + 32 = 302 °F (NIST SP 811, appendix B.8)
     expect(cell).toContain('150 °C');
+  });
+
+  it('starts in the shop\'s own units on a tablet where nobody has chosen any yet', async () => {
+    const root = await open(null);
+    http.expectOne('/api/shop').flush({ units: 'metric' });
+    await new Promise((resolve) => setTimeout(resolve));
+    await fixture.whenStable();
+
+    // The shop's unit reads first, in bold; the other beside it.
+    expect(root.querySelector('td.temp strong')?.textContent?.trim()).toBe('150 °C');
+    expect(root.querySelector('td.temp .other')?.textContent).toContain('302');
   });
 
   it('narrows the table to the recipes the filter words match', async () => {

@@ -13,6 +13,7 @@ import type { ShopUnits } from '../../shared/press/units';
 import { apiErrorSentence } from '../core/api-error';
 import { BROWSER_STORAGE } from '../core/browser-storage';
 import { checkRecipe, draftFrom, fieldOfHubPath, type RecipeDraft, type RecipeField } from './recipe-values';
+import { ShopApi } from '../shop/shop-api';
 import { RecipesApi } from './recipes-api';
 
 const UNITS_KEY = 'dwell.recipes.units';
@@ -41,6 +42,7 @@ const HISTORY_FIELDS: Readonly<Record<string, [label: string, unit: string]>> = 
 export class RecipeBook {
   private readonly api = inject(RecipesApi);
   private readonly storage = inject(BROWSER_STORAGE);
+  private readonly shop = inject(ShopApi);
 
   protected readonly pressureClasses = PRESSURE_CLASSES;
   protected readonly peelKinds = PEEL_KINDS;
@@ -49,8 +51,9 @@ export class RecipeBook {
   protected readonly recipes = signal<RecipeListItem[]>([]);
   protected readonly loadProblem = signal<string | null>(null);
   protected readonly filter = signal('');
-  // The hub has no shop-settings call for the app yet: the temperature unit is chosen here and remembered; °F by default like the demo shop.
-  protected readonly units = signal<ShopUnits>(this.storage.getItem(UNITS_KEY) === 'metric' ? 'metric' : 'imperial');
+  // A unit chosen on this screen is remembered on this tablet; until then the shop's own units are used.
+  private readonly chosenUnits = this.storage.getItem(UNITS_KEY);
+  protected readonly units = signal<ShopUnits>(this.chosenUnits === 'metric' ? 'metric' : 'imperial');
   protected readonly unitLabel = computed(() => (this.units() === 'imperial' ? '°F' : '°C'));
 
   protected readonly editing = signal<RecipeListItem | null>(null);
@@ -72,6 +75,16 @@ export class RecipeBook {
 
   constructor() {
     void this.loadRecipes();
+    if (this.chosenUnits === null) void this.useShopUnits();
+  }
+
+  private async useShopUnits(): Promise<void> {
+    try {
+      const { units } = await this.shop.settings();
+      if (this.storage.getItem(UNITS_KEY) === null) this.units.set(units);
+    } catch {
+      // Without the shop's settings the screen keeps °F and its own switch still works.
+    }
   }
 
   /** Shows temperatures in the shop's units first. */
