@@ -19,7 +19,11 @@ export async function seed(knex: Knex): Promise<void> {
     shift_start: '07:00:00',
     shift_end: '15:30:00',
     working_days: '1,2,3,4,5',
-    standard_pieces_per_hour: 40,
+    // Invented demo rates: weeding fine lettering is the slow stage, packing the quick one.
+    standard_cut_per_hour: 120,
+    standard_weed_per_hour: 30,
+    standard_press_per_hour: 45,
+    standard_pack_per_hour: 90,
     heat_exposure_limit_s: 45,
   });
 

@@ -12,6 +12,7 @@ import type { Db, ShopSettingsRow, StationRow } from '../db/tables';
 import { HttpError } from '../http/http-error';
 import type { RollWithFilm } from '../rolls/roll-view';
 import { BoardRepository, type BoardBagRow, type FlagRow, type OpenOrderRow, type ShiftEventRow } from './board-repository';
+import { standardRatesOf } from '../shop/shop-view';
 
 /** Millimetres in an inch, exactly (international inch, 1959). */
 const MM_PER_INCH = 25.4;
@@ -52,7 +53,7 @@ export class BoardService {
       orders: orders.map((order) => ({ id: order.id, code: order.code, dueAt: order.due_at.toISOString() })),
       spoils: spoilsOf(events),
       shift,
-      standardPiecesPerHour: settings.standard_pieces_per_hour,
+      standardRates: standardRatesOf(settings),
       addWorkingHours,
       planShift,
     });

@@ -15,7 +15,11 @@ export interface ShopSettingsRow {
   shift_end: string;
   /** ISO weekday numbers the shift runs on, e.g. '1,2,3,4,5' (see src/shared/shop-contract.ts). */
   working_days: string;
-  standard_pieces_per_hour: number;
+  /** Good pieces per hour planned at each stage of work before the floor has shown its own rate. */
+  standard_cut_per_hour: number;
+  standard_weed_per_hour: number;
+  standard_press_per_hour: number;
+  standard_pack_per_hour: number;
   heat_exposure_limit_s: number;
   updated_at: Date;
 }

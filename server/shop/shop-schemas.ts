@@ -73,7 +73,15 @@ export const shopSettingsInput = z
     shiftStart: timeOfDay('shift start'),
     shiftEnd: timeOfDay('shift end'),
     workingDays,
-    standardPiecesPerHour: whole('The standard pieces per hour', SHOP_LIMITS.standardPiecesPerHour),
+    standardRates: z.object(
+      {
+        cut: whole('The standard rate at cut', SHOP_LIMITS.standardRate),
+        weed: whole('The standard rate at weed', SHOP_LIMITS.standardRate),
+        press: whole('The standard rate at press', SHOP_LIMITS.standardRate),
+        pack: whole('The standard rate at pack', SHOP_LIMITS.standardRate),
+      },
+      { error: 'Give a standard rate for each stage: cut, weed, press and pack.' },
+    ),
     bagMaxPieces: whole('The most pieces in one bag', SHOP_LIMITS.bagMaxPieces),
     heatExposureLimitS: whole('The heat exposure limit in seconds', SHOP_LIMITS.heatExposureLimitS),
   })

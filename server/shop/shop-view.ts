@@ -1,9 +1,15 @@
+import type { StationKind } from '../../src/shared/names';
 import { parseWorkingDays, workingDaysText, type ShopSettings, type ShopSettingsInput } from '../../src/shared/shop-contract';
 import type { ShopSettingsRow } from '../db/tables';
 import type { ShopSettingsChanges } from './shop-repository';
 
 // MariaDB gives TIME back as 'HH:MM:SS'; the API speaks 'HH:MM'.
 const clock = (time: string) => time.slice(0, 5);
+
+/** The standard good pieces per hour of each stage of work, from the row's one column per stage. */
+export function standardRatesOf(row: ShopSettingsRow): Record<StationKind, number> {
+  return { cut: row.standard_cut_per_hour, weed: row.standard_weed_per_hour, press: row.standard_press_per_hour, pack: row.standard_pack_per_hour };
+}
 
 /** The stored settings as the API shows them. */
 export function toShopSettings(row: ShopSettingsRow): ShopSettings {
@@ -17,7 +23,7 @@ export function toShopSettings(row: ShopSettingsRow): ShopSettings {
     shiftStart: clock(row.shift_start),
     shiftEnd: clock(row.shift_end),
     workingDays: parseWorkingDays(row.working_days),
-    standardPiecesPerHour: row.standard_pieces_per_hour,
+    standardRates: standardRatesOf(row),
     bagMaxPieces: row.bag_max_pieces,
     heatExposureLimitS: row.heat_exposure_limit_s,
     updatedAt: row.updated_at.toISOString(),
@@ -36,7 +42,10 @@ export function toShopRow(input: ShopSettingsInput): ShopSettingsChanges {
     shift_start: `${input.shiftStart}:00`,
     shift_end: `${input.shiftEnd}:00`,
     working_days: workingDaysText(input.workingDays),
-    standard_pieces_per_hour: input.standardPiecesPerHour,
+    standard_cut_per_hour: input.standardRates.cut,
+    standard_weed_per_hour: input.standardRates.weed,
+    standard_press_per_hour: input.standardRates.press,
+    standard_pack_per_hour: input.standardRates.pack,
     bag_max_pieces: input.bagMaxPieces,
     heat_exposure_limit_s: input.heatExposureLimitS,
   };

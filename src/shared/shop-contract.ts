@@ -1,3 +1,4 @@
+import type { StationKind } from './names';
 import type { ShopUnits } from './press/units';
 
 /** ISO 8601 weekday numbers: 1 is Monday, 7 is Sunday. */
@@ -14,7 +15,7 @@ export const SHOP_LIMITS = {
   phoneMax: 40,
   emailMax: 254,
   timeZoneMax: 64,
-  standardPiecesPerHour: { min: 1, max: 2000 },
+  standardRate: { min: 1, max: 2000 },
   bagMaxPieces: { min: 1, max: 500 },
   heatExposureLimitS: { min: 5, max: 600 },
 } as const;
@@ -35,8 +36,8 @@ export interface ShopSettings {
   shiftStart: string;
   shiftEnd: string;
   workingDays: IsoWeekday[];
-  /** Good pieces per hour a stage is planned at before the floor has shown its own rate. */
-  standardPiecesPerHour: number;
+  /** Good pieces per hour each stage of work is planned at before the floor has shown its own rate. */
+  standardRates: Record<StationKind, number>;
   /** Most pieces one job bag holds when an order's jobs are split into bags. */
   bagMaxPieces: number;
   /** Longest press dwell, in seconds, before the press card warns of heat exposure. */

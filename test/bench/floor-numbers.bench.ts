@@ -31,7 +31,7 @@ function busyFloor(orderCount: number, eventsPerBag: number): FloorInput {
     }
   }
   const spoils = events.filter((e) => e.kind === 'spoil').map((e, i) => ({ reason: ['Film lifted after peel', 'Placed crooked', 'Torn while weeding'][i % 3]!, quantity: e.quantity }));
-  return { stations, events, bags, orders, spoils, shift: SHIFT, standardPiecesPerHour: 40 };
+  return { stations, events, bags, orders, spoils, shift: SHIFT, standardRates: { cut: 40, weed: 40, press: 40, pack: 40 } };
 }
 
 // The baseline's sum is printed at the end, so the engine cannot skip the loop as dead code.

@@ -28,7 +28,7 @@ const input: FloorInput = {
   ],
   spoils: [{ reason: 'Scorch or shine mark', quantity: 2 }],
   shift: { startAt: at('07:00'), endAt: at('15:00'), now: at('09:00') },
-  standardPiecesPerHour: 20,
+  standardRates: { cut: 20, weed: 20, press: 20, pack: 20 },
 };
 
 describe('the floor board\'s numbers, put together', () => {

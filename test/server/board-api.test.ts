@@ -29,11 +29,19 @@ beforeAll(async () => {
   saved = (await hub.db('shop_settings').where({ id: 1 }).first())!;
 });
 afterAll(async () => {
-  const { shift_start, shift_end, standard_pieces_per_hour, time_zone, working_days } = saved;
-  await hub.db('shop_settings').where({ id: 1 }).update({ shift_start, shift_end, standard_pieces_per_hour, time_zone, working_days });
+  const { shift_start, shift_end, standard_cut_per_hour, standard_weed_per_hour, standard_press_per_hour, standard_pack_per_hour, time_zone, working_days } = saved;
+  await hub.db('shop_settings').where({ id: 1 }).update({ shift_start, shift_end, standard_cut_per_hour, standard_weed_per_hour, standard_press_per_hour, standard_pack_per_hour, time_zone, working_days });
   // Later test files on this database should not find these invented orders open.
   if (madeOrders.length > 0) await hub.db('orders').whereIn('id', madeOrders).update({ status: 'cancelled' });
   await hub.close();
+});
+
+/** The same standard rate at every stage of work, as the shop's row keeps them. */
+const standardRates = (perHour: number) => ({
+  standard_cut_per_hour: perHour,
+  standard_weed_per_hour: perHour,
+  standard_press_per_hour: perHour,
+  standard_pack_per_hour: perHour,
 });
 
 const londonClock = (at: Date) =>
@@ -41,7 +49,7 @@ const londonClock = (at: Date) =>
 
 /**
  * Starts a shift at a whole second at least a second ahead (London wall clock) with a standard rate of 40 pieces
- * an hour, worked every day of the week (so the tests pass whatever day they run on). It runs for a day less one
+ * an hour at every stage, worked every day of the week (so the tests pass whatever day they run on). It runs for a day less one
  * second, so the break before it is one second and the shift opens half a second before its start: events of
  * earlier tests, all older than that, stay out of its numbers.
  */
@@ -52,7 +60,7 @@ async function freshShift(): Promise<void> {
     shift_start: londonClock(start),
     shift_end: londonClock(new Date(start.getTime() - 1000)),
     working_days: workingDaysText(ISO_WEEKDAYS),
-    standard_pieces_per_hour: 40,
+    ...standardRates(40),
   });
   await new Promise((resolve) => setTimeout(resolve, start.getTime() - Date.now() + 20));
 }
@@ -160,7 +168,7 @@ describe('GET /api/board', () => {
 
   it('counts an order\'s ETA in the shifts of the shop\'s working days only', async () => {
     await freshShift();
-    await hub.db('shop_settings').where({ id: 1 }).update({ standard_pieces_per_hour: 1 });
+    await hub.db('shop_settings').where({ id: 1 }).update(standardRates(1));
     const tag = String(Math.floor(Math.random() * 1e6));
     const order = await orderOfOneBag(`W${tag}`, new Date(Date.now() + 3 * 24 * HOUR_MS), 30);
 

@@ -45,7 +45,7 @@ const DEMO_SHOP = {
   shiftStart: '07:00',
   shiftEnd: '15:30',
   workingDays: [1, 2, 3, 4, 5],
-  standardPiecesPerHour: 40,
+  standardRates: { cut: 120, weed: 30, press: 45, pack: 90 },
   bagMaxPieces: 24,
   heatExposureLimitS: 45,
 };
@@ -79,16 +79,16 @@ describe('changing the shop settings', () => {
       shiftStart: '07:30',
       shiftEnd: '16:00',
       workingDays: [6, 1, 2, 3, 4, 5],
-      standardPiecesPerHour: 55,
+      standardRates: { cut: 150, weed: 25, press: 55, pack: 100 },
     };
 
     const res = await save(owner, change).expect(200);
 
-    const expected = { ...DEMO_SHOP, shiftStart: '07:30', shiftEnd: '16:00', workingDays: [1, 2, 3, 4, 5, 6], standardPiecesPerHour: 55 };
+    const expected = { ...DEMO_SHOP, shiftStart: '07:30', shiftEnd: '16:00', workingDays: [1, 2, 3, 4, 5, 6], standardRates: { cut: 150, weed: 25, press: 55, pack: 100 } };
     expect(res.body).toEqual({ ...expected, updatedAt: expect.any(String) });
     expect(Date.parse(res.body.updatedAt)).toBeGreaterThanOrEqual(before - 1000);
     expect((await read(lead).expect(200)).body).toEqual(res.body);
-    expect(await stored()).toMatchObject({ shop_name: 'Bramble Yard Apparel', shift_start: '07:30:00', shift_end: '16:00:00', working_days: '1,2,3,4,5,6', standard_pieces_per_hour: 55 });
+    expect(await stored()).toMatchObject({ shop_name: 'Bramble Yard Apparel', shift_start: '07:30:00', shift_end: '16:00:00', working_days: '1,2,3,4,5,6', standard_weed_per_hour: 25, standard_pack_per_hour: 100 });
   });
 
   it('accepts a shift that ends after midnight and spells a time zone the way the tz database does', async () => {
@@ -107,10 +107,10 @@ describe('changing the shop settings', () => {
   });
 
   it('refuses a lead\'s change with a 403 and leaves the settings as they were', async () => {
-    const res = await save(lead, { ...(await currentInput()), standardPiecesPerHour: 99 });
+    const res = await save(lead, { ...(await currentInput()), standardRates: { cut: 99, weed: 99, press: 99, pack: 99 } });
     expect(res.status).toBe(403);
     expect(res.body.error).toMatch(/role may not/);
-    expect((await stored()).standard_pieces_per_hour).toBe(seeded.standard_pieces_per_hour);
+    expect((await stored()).standard_weed_per_hour).toBe(seeded.standard_weed_per_hour);
   });
 
   // Mars/Olympus is no zone in the IANA tz database; 25:00 is no hour of a 24-hour clock (ISO 8601 allows 00 to 23, and 24:00 only as the end of a day).
@@ -121,7 +121,8 @@ describe('changing the shop settings', () => {
     ['workingDays', { workingDays: [] }, /Tick at least one working day/],
     ['workingDays', { workingDays: [1, 3, 3] }, /Wednesday is there twice/],
     ['workingDays.0', { workingDays: [0, 1] }, /ISO weekday numbers from 1 \(Monday\) to 7 \(Sunday\)/],
-    ['standardPiecesPerHour', { standardPiecesPerHour: 0 }, /standard pieces per hour is a whole number from 1 to 2000/],
+    ['standardRates.weed', { standardRates: { cut: 120, weed: 0, press: 45, pack: 90 } }, /standard rate at weed is a whole number from 1 to 2000/],
+    ['standardRates', { standardRates: 40 }, /Give a standard rate for each stage: cut, weed, press and pack/],
     ['bagMaxPieces', { bagMaxPieces: 12.5 }, /most pieces in one bag is a whole number from 1 to 500/],
     ['heatExposureLimitS', { heatExposureLimitS: 601 }, /heat exposure limit in seconds is a whole number from 5 to 600/],
     ['email', { email: 'hello at bramble yard' }, /Enter the shop's e-mail like hello@shop.example, or leave it empty/],
@@ -155,7 +156,7 @@ describe('the live board after a change', () => {
     board.on('board:update', (update) => updates.push(update));
     const heard = new Promise<BoardUpdate>((resolve) => board.once('board:update', resolve));
 
-    await save(owner, { ...(await currentInput()), standardPiecesPerHour: 0 }).expect(400);
+    await save(owner, { ...(await currentInput()), bagMaxPieces: 0 }).expect(400);
     // A broadcast sent for the refused change would have arrived by now.
     await new Promise((resolve) => setTimeout(resolve, 200));
     expect(updates).toEqual([]);

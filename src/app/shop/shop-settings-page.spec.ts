@@ -16,7 +16,7 @@ const STORED: ShopSettings = {
   shiftStart: '07:00',
   shiftEnd: '15:30',
   workingDays: [1, 2, 3, 4, 5],
-  standardPiecesPerHour: 40,
+  standardRates: { cut: 120, weed: 30, press: 45, pack: 90 },
   bagMaxPieces: 24,
   heatExposureLimitS: 45,
   updatedAt: '2026-05-11T08:00:00.000Z',
@@ -74,7 +74,7 @@ describe('ShopSettingsPage', () => {
     expect(input('shift-start').value).toBe('07:00');
     expect(input('shift-end').value).toBe('15:30');
     expect(input('time-zone').value).toBe('Europe/London');
-    expect(input('pieces-per-hour').value).toBe('40');
+    expect(['cut', 'weed', 'press', 'pack'].map((kind) => input(`rate-${kind}`).value)).toEqual(['120', '30', '45', '90']);
     expect(input('bag-max-pieces').value).toBe('24');
     expect(input('heat-limit').value).toBe('45');
     expect([1, 2, 3, 4, 5, 6, 7].map(pressed)).toEqual(['true', 'true', 'true', 'true', 'true', 'false', 'false']);
@@ -134,6 +134,22 @@ describe('ShopSettingsPage', () => {
     expect(input('time-zone').value).toBe('Mars/Olympus');
   });
 
+  it('brings the sentence about a field further down the page into view when Save finds it', async () => {
+    await openWithSettingsAs('owner');
+    const shown: Element[] = [];
+    // jsdom lays nothing out, so it has no scrollIntoView of its own: record which element asks to be shown.
+    Element.prototype.scrollIntoView = function (this: Element) {
+      shown.push(this);
+    };
+
+    await type('rate-pack', '0');
+    saveButton()!.click();
+    await settle();
+
+    expect(shown).toEqual([byTestId('problem-ratePack')]);
+    delete (Element.prototype as Partial<Element>).scrollIntoView;
+  });
+
   it('puts each of the hub refusals beside the field it names and keeps what the owner typed', async () => {
     await openWithSettingsAs('owner');
 
@@ -159,6 +175,24 @@ describe('ShopSettingsPage', () => {
     expect(input('shop-email').value).toBe('orders@brambleyard.example');
     expect(input('heat-limit').value).toBe('60');
     expect(byTestId('shop-confirmation')).toBeNull();
+  });
+
+  it('sends each stage its own standard rate and puts a refusal of one beside that stage', async () => {
+    await openWithSettingsAs('owner');
+
+    await type('rate-weed', '25');
+    saveButton()!.click();
+    const sent = http.expectOne({ method: 'PUT', url: '/api/shop' });
+    expect(sent.request.body.standardRates).toEqual({ cut: 120, weed: 25, press: 45, pack: 90 });
+    sent.flush(
+      { error: 'Some of the settings form is missing or not valid.', details: [{ path: 'standardRates.weed', message: 'The standard rate at weed is too low for this shop.' }] },
+      { status: 400, statusText: 'Bad Request' },
+    );
+    await settle();
+
+    expect(byTestId('problem-rateWeed')!.textContent).toContain('The standard rate at weed is too low for this shop.');
+    expect(byTestId('problem-rateCut')).toBeNull();
+    expect(input('rate-weed').value).toBe('25');
   });
 
   it('says the hub cannot be reached and keeps what was typed when a save does not get through', async () => {
@@ -193,7 +227,7 @@ describe('ShopSettingsPage', () => {
 
     expect(input('shop-name').value).toBe('Bramble Yard Apparel');
     expect(byTestId('shop-read-only')!.textContent).toContain('Only the owner can change the shop settings.');
-    for (const id of ['shop-name', 'shop-phone', 'shop-email', 'shift-start', 'shift-end', 'time-zone', 'pieces-per-hour', 'bag-max-pieces', 'heat-limit']) {
+    for (const id of ['shop-name', 'shop-phone', 'shop-email', 'shift-start', 'shift-end', 'time-zone', 'rate-cut', 'rate-weed', 'rate-press', 'rate-pack', 'bag-max-pieces', 'heat-limit']) {
       expect(`${id} ${input(id).disabled}`).toBe(`${id} true`);
     }
     expect(byTestId<HTMLTextAreaElement>('shop-address')!.disabled).toBe(true);

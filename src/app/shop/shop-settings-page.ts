@@ -1,5 +1,5 @@
 import { HttpErrorResponse } from '@angular/common/http';
-import { ChangeDetectionStrategy, Component, DestroyRef, computed, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, DestroyRef, ElementRef, Injector, afterNextRender, computed, inject, signal } from '@angular/core';
 import { takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
 import { AbstractControl, FormBuilder, FormControl, ReactiveFormsModule } from '@angular/forms';
 import { MatAutocompleteModule } from '@angular/material/autocomplete';
@@ -9,12 +9,14 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { map } from 'rxjs';
+import { STATION_KINDS } from '../../shared/names';
 import type { ShopUnits } from '../../shared/press/units';
 import { ISO_WEEKDAYS, SHOP_LIMITS, WEEKDAY_NAMES, type IsoWeekday, type ShopSettings } from '../../shared/shop-contract';
 import { Session } from '../auth/session';
 import { apiErrorSentence, hasStatus, type ApiErrorBody } from '../core/api-error';
+import { KIND_LABELS } from '../board/board-format';
 import { ShopApi } from './shop-api';
-import { checkShop, draftFrom, placeHubDetails, sameDraft, shiftCrossesMidnight, toggledDay, type ShopDraft, type ShopField, type ShopProblems } from './shop-values';
+import { RATE_FIELDS, checkShop, draftFrom, placeHubDetails, sameDraft, shiftCrossesMidnight, toggledDay, type ShopDraft, type ShopField, type ShopProblems } from './shop-values';
 import { matchingZones, zoneClock } from './time-zones';
 
 const SAVED = 'Shop settings saved.';
@@ -35,7 +37,10 @@ const EMPTY_DRAFT: ShopDraft = {
   shiftStart: '',
   shiftEnd: '',
   workingDays: [],
-  standardPiecesPerHour: '',
+  rateCut: '',
+  rateWeed: '',
+  ratePress: '',
+  ratePack: '',
   bagMaxPieces: '',
   heatExposureLimitS: '',
   units: 'imperial',
@@ -58,8 +63,11 @@ export class ShopSettingsPage {
   private readonly api = inject(ShopApi);
   private readonly session = inject(Session);
   private readonly destroyRef = inject(DestroyRef);
+  private readonly host = inject<ElementRef<HTMLElement>>(ElementRef);
+  private readonly injector = inject(Injector);
 
   protected readonly limits = SHOP_LIMITS;
+  protected readonly rates = STATION_KINDS.map((kind) => ({ kind, field: RATE_FIELDS[kind], label: KIND_LABELS[kind] }));
   protected readonly weekdays = ISO_WEEKDAYS.map((day) => ({ day, name: WEEKDAY_NAMES[day], short: WEEKDAY_NAMES[day].slice(0, 3) }));
   protected readonly canEdit = computed(() => this.session.role() === 'owner');
 
@@ -79,7 +87,10 @@ export class ShopSettingsPage {
     shiftStart: [''],
     shiftEnd: [''],
     workingDays: new FormControl<IsoWeekday[]>([], { nonNullable: true }),
-    standardPiecesPerHour: [''],
+    rateCut: [''],
+    rateWeed: [''],
+    ratePress: [''],
+    ratePack: [''],
     bagMaxPieces: [''],
     heatExposureLimitS: [''],
     units: ['imperial' as ShopUnits],
@@ -132,6 +143,7 @@ export class ShopSettingsPage {
     if (!check.ok) {
       this.problems.set(check.problems);
       this.saveProblem.set(FIX_FIELDS);
+      this.showFirstProblem();
       return;
     }
     this.saving.set(true);
@@ -176,6 +188,12 @@ export class ShopSettingsPage {
     }
     const headline = typeof body?.error === 'string' && body.error.trim() ? body.error.trim() : FIX_FIELDS;
     this.saveProblem.set([headline, ...unplaced].join(' '));
+    this.showFirstProblem();
+  }
+
+  /** Brings the first sentence about a field into view, so a problem further down the page is not missed. */
+  private showFirstProblem(): void {
+    afterNextRender(() => this.host.nativeElement.querySelector('.field-problem')?.scrollIntoView?.({ block: 'center', behavior: 'smooth' }), { injector: this.injector });
   }
 
   private clearConfirmationOnChange(): void {

@@ -13,7 +13,7 @@ const STORED: ShopSettings = {
   shiftStart: '07:00',
   shiftEnd: '15:30',
   workingDays: [1, 2, 3, 4, 5],
-  standardPiecesPerHour: 40,
+  standardRates: { cut: 120, weed: 30, press: 45, pack: 90 },
   bagMaxPieces: 24,
   heatExposureLimitS: 45,
   updatedAt: '2026-05-11T08:00:00.000Z',
@@ -69,7 +69,10 @@ describe('shop values', () => {
 
   it('holds each number to the same bounds as the hub, both ends included', () => {
     const bounds = [
-      ['standardPiecesPerHour', SHOP_LIMITS.standardPiecesPerHour],
+      ['rateCut', SHOP_LIMITS.standardRate],
+      ['rateWeed', SHOP_LIMITS.standardRate],
+      ['ratePress', SHOP_LIMITS.standardRate],
+      ['ratePack', SHOP_LIMITS.standardRate],
       ['bagMaxPieces', SHOP_LIMITS.bagMaxPieces],
       ['heatExposureLimitS', SHOP_LIMITS.heatExposureLimitS],
     ] as const;
@@ -128,6 +131,8 @@ describe('shop values', () => {
     ]);
     expect(placed.problems).toEqual({ timeZone: 'Use an IANA time zone name.', workingDays: 'A working day is a number from 1 to 7.' });
     expect(placed.unplaced).toEqual(['The hub does not keep a colour.']);
+    expect(placeHubDetails([{ path: 'standardRates.weed', message: 'Too slow.' }]).problems).toEqual({ rateWeed: 'Too slow.' });
+    expect(placeHubDetails([{ path: 'standardRates', message: 'Give all four.' }]).problems).toEqual({ rateCut: 'Give all four.' });
     expect(placeHubDetails(undefined)).toEqual({ problems: {}, unplaced: [] });
   });
 });

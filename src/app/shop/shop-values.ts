@@ -1,3 +1,4 @@
+import { STATION_KINDS, type StationKind } from '../../shared/names';
 import { ISO_WEEKDAYS, SHOP_LIMITS, type IsoWeekday, type ShopSettings, type ShopSettingsInput } from '../../shared/shop-contract';
 import type { ShopUnits } from '../../shared/press/units';
 import { knownTimeZone } from './time-zones';
@@ -12,7 +13,11 @@ export interface ShopDraft {
   shiftStart: string;
   shiftEnd: string;
   workingDays: IsoWeekday[];
-  standardPiecesPerHour: string;
+  /** Standard good pieces per hour at each stage of work. */
+  rateCut: string;
+  rateWeed: string;
+  ratePress: string;
+  ratePack: string;
   bagMaxPieces: string;
   heatExposureLimitS: string;
   units: ShopUnits;
@@ -36,11 +41,17 @@ const SHOP_FIELDS: readonly ShopField[] = [
   'shiftStart',
   'shiftEnd',
   'workingDays',
-  'standardPiecesPerHour',
+  'rateCut',
+  'rateWeed',
+  'ratePress',
+  'ratePack',
   'bagMaxPieces',
   'heatExposureLimitS',
   'units',
 ];
+
+/** The form field holding each stage's standard rate. */
+export const RATE_FIELDS: Readonly<Record<StationKind, ShopField>> = { cut: 'rateCut', weed: 'rateWeed', press: 'ratePress', pack: 'ratePack' };
 
 const TIME_OF_DAY = /^([01]\d|2[0-3]):[0-5]\d$/;
 const WHOLE = /^\d+$/;
@@ -59,7 +70,10 @@ export function draftFrom(settings: ShopSettings): ShopDraft {
     shiftStart: settings.shiftStart.slice(0, 5),
     shiftEnd: settings.shiftEnd.slice(0, 5),
     workingDays: ISO_WEEKDAYS.filter((day) => settings.workingDays.includes(day)),
-    standardPiecesPerHour: String(settings.standardPiecesPerHour),
+    rateCut: String(settings.standardRates.cut),
+    rateWeed: String(settings.standardRates.weed),
+    ratePress: String(settings.standardRates.press),
+    ratePack: String(settings.standardRates.pack),
     bagMaxPieces: String(settings.bagMaxPieces),
     heatExposureLimitS: String(settings.heatExposureLimitS),
     units: settings.units,
@@ -125,7 +139,9 @@ export function checkShop(draft: ShopDraft): ShopCheck {
   const workingDays = ISO_WEEKDAYS.filter((day) => draft.workingDays.includes(day));
   if (workingDays.length === 0) problems.workingDays = 'Pick at least one day the shop works.';
 
-  const standardPiecesPerHour = whole(draft.standardPiecesPerHour, SHOP_LIMITS.standardPiecesPerHour, 'Pieces per hour', 'standardPiecesPerHour', problems);
+  const standardRates = Object.fromEntries(
+    STATION_KINDS.map((kind) => [kind, whole(draft[RATE_FIELDS[kind]] as string, SHOP_LIMITS.standardRate, `The standard rate at ${kind}`, RATE_FIELDS[kind], problems)]),
+  ) as Record<StationKind, number>;
   const bagMaxPieces = whole(draft.bagMaxPieces, SHOP_LIMITS.bagMaxPieces, 'Pieces per bag', 'bagMaxPieces', problems);
   const heatExposureLimitS = whole(draft.heatExposureLimitS, SHOP_LIMITS.heatExposureLimitS, 'The heat exposure limit in seconds', 'heatExposureLimitS', problems);
   if (draft.units !== 'imperial' && draft.units !== 'metric') problems.units = 'Pick imperial or metric.';
@@ -143,7 +159,7 @@ export function checkShop(draft: ShopDraft): ShopCheck {
       shiftStart: draft.shiftStart,
       shiftEnd: draft.shiftEnd,
       workingDays,
-      standardPiecesPerHour,
+      standardRates,
       bagMaxPieces,
       heatExposureLimitS,
     },
@@ -158,8 +174,11 @@ export function placeHubDetails(details: unknown): { problems: ShopProblems; unp
   for (const detail of details as { path?: unknown; message?: unknown }[]) {
     const message = typeof detail?.message === 'string' ? detail.message.trim() : '';
     if (!message) continue;
-    // A path is 'timeZone', or for a list 'workingDays.0' / ['workingDays', 0]: the field is its first part.
-    const first = Array.isArray(detail.path) ? detail.path[0] : typeof detail.path === 'string' ? detail.path.split('.')[0] : undefined;
+    // A path is 'timeZone', or for a list 'workingDays.0' / ['workingDays', 0]: the field is its first part;
+    // 'standardRates.weed' is the weed rate's field, and 'standardRates' alone the first rate's.
+    const parts: unknown[] = Array.isArray(detail.path) ? detail.path : typeof detail.path === 'string' ? detail.path.split('.') : [];
+    const rateKind = STATION_KINDS.find((kind) => kind === parts[1]) ?? 'cut';
+    const first = parts[0] === 'standardRates' ? RATE_FIELDS[rateKind] : parts[0];
     const field = SHOP_FIELDS.find((name) => name === first);
     if (field && !problems[field]) problems[field] = message;
     else if (!field) unplaced.push(message);

@@ -20,7 +20,7 @@ export interface FloorInput {
   spoils: FloorSpoil[];
   shift: FloorShift;
   /** The shop's standard good pieces per hour at a stage, used where no rate has been observed yet. */
-  standardPiecesPerHour: number;
+  standardRates: Record<StationKind, number>;
   /** How hours of work fall on the clock (shifts); plain clock hours when absent. */
   addWorkingHours?: AddWorkingHours;
   /** The shift takt time plans for, when it is not `shift` (the next one, once `shift` has ended). */
@@ -52,7 +52,7 @@ export function floorNumbers(input: FloorInput): FloorNumbers {
     throughput,
     hoursInStage: averageHoursInStage(timelines, soFar),
     flow: systemFlow(timelines, soFar),
-    orders: orderEtas(input.orders, input.bags, workingRatesByWork(input.events, soFar), input.standardPiecesPerHour, Date.parse(input.shift.now), input.addWorkingHours),
+    orders: orderEtas(input.orders, input.bags, workingRatesByWork(input.events, soFar), input.standardRates, Date.parse(input.shift.now), input.addWorkingHours),
     yield: floorYieldFromEvents(input.events, soFar),
     spoilReasons: spoilPareto(input.spoils),
     takt: taktForToday(input.planShift ?? input.shift, input.orders, input.bags),

@@ -22,7 +22,7 @@ export interface OrderEta {
 
 /**
  * ETA for each order. For every stage of work w the order still needs (remaining_w > 0):
- *   rate_w  = good pieces per working hour observed at w (see working-rate.ts), or the shop's standard pieces per hour when none was;
+ *   rate_w  = good pieces per working hour observed at w (see working-rate.ts), or the shop's standard rate for w when none was;
  *   hours_w = remaining_w / rate_w.
  * The bottleneck is the w with the largest hours_w (ties go to the later stage), and
  *   ETA = now + hours_bottleneck, counted in working hours (time between shifts does not work);
@@ -34,7 +34,7 @@ export function orderEtas(
   orders: readonly FloorOrder[],
   bags: readonly FloorBag[],
   observedPiecesPerHour: Record<StationKind, number | null>,
-  standardPiecesPerHour: number,
+  standardRates: Readonly<Record<StationKind, number>>,
   nowMs: number,
   addWorkingHours: AddWorkingHours = addClockHours,
 ): OrderEta[] {
@@ -49,7 +49,7 @@ export function orderEtas(
     for (const w of WORK_ROUTE) {
       if (remaining[w] === 0) continue;
       const observed = observedPiecesPerHour[w];
-      const r = observed !== null && observed > 0 ? observed : standardPiecesPerHour;
+      const r = observed !== null && observed > 0 ? observed : standardRates[w];
       if (remaining[w] / r >= hours) [bottleneck, hours, rate] = [w, remaining[w] / r, r];
     }
     const etaMs = bottleneck ? addWorkingHours(nowMs, hours) : null;
