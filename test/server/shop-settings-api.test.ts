@@ -4,6 +4,7 @@ import type { ShopSettings, ShopSettingsInput } from '../../src/shared/shop-cont
 import type { ShopSettingsRow } from '../../server/db/tables';
 import type { RunningHub } from '../../server/hub';
 import { leadCookie, openSocket, operatorOn, startTestHub, type ClientSocket } from './events-fixtures';
+import { DEMO_SHOP } from '../../seeds/data/demo-shop';
 
 let hub: RunningHub;
 let owner: string;
@@ -33,22 +34,8 @@ async function currentInput(): Promise<ShopSettingsInput> {
   return input;
 }
 
-// The demo shop as seeds/02_shop_and_people.ts writes it (invented for the demo). Weekdays are numbered as
-// ISO 8601 numbers them, 1 = Monday to 7 = Sunday (ISO 8601-1:2019, calendar week day numbering; from memory).
-const DEMO_SHOP = {
-  shopName: 'Bramble Yard Apparel',
-  address: 'Unit 4, Bramble Yard, Tanner Row, Hollinford',
-  phone: '01632 960412',
-  email: 'hello@brambleyard.example',
-  units: 'imperial',
-  timeZone: 'Europe/London',
-  shiftStart: '07:00',
-  shiftEnd: '15:30',
-  workingDays: [1, 2, 3, 4, 5],
-  standardRates: { cut: 120, weed: 30, press: 45, pack: 90 },
-  bagMaxPieces: 24,
-  heatExposureLimitS: 45,
-};
+// The demo shop as seeds/02_shop_and_people.ts writes it (seeds/data/demo-shop.ts). Weekdays are numbered as ISO 8601
+// numbers them, 1 = Monday to 7 = Sunday (ISO 8601-1:2019, calendar week day numbering; from memory).
 
 describe('reading the shop settings', () => {
   it('shows the lead and the owner the demo shop, its hours in HH:MM and its days Monday to Friday', async () => {

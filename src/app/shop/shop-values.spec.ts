@@ -1,23 +1,10 @@
 import { getISODay } from 'date-fns';
 import { SHOP_LIMITS, WEEKDAY_NAMES, type IsoWeekday, type ShopSettings } from '../../shared/shop-contract';
 import { checkShop, draftFrom, placeHubDetails, sameDraft, shiftCrossesMidnight, toggledDay, type ShopDraft } from './shop-values';
+import { DEMO_SHOP } from '../../../seeds/data/demo-shop';
 
-// Demo data: the invented shop, not a real one.
-const STORED: ShopSettings = {
-  shopName: 'Bramble Yard Apparel',
-  address: 'Unit 4, Bramble Yard, Tanner Row, Hollinford',
-  phone: '01632 960412',
-  email: 'hello@brambleyard.example',
-  units: 'imperial',
-  timeZone: 'Europe/London',
-  shiftStart: '07:00',
-  shiftEnd: '15:30',
-  workingDays: [1, 2, 3, 4, 5],
-  standardRates: { cut: 120, weed: 30, press: 45, pack: 90 },
-  bagMaxPieces: 24,
-  heatExposureLimitS: 45,
-  updatedAt: '2026-05-11T08:00:00.000Z',
-};
+// The demo shop (an invented business), as the hub would answer it.
+const STORED: ShopSettings = { ...DEMO_SHOP, updatedAt: '2026-05-11T08:00:00.000Z' };
 
 const draft = (changes: Partial<ShopDraft> = {}): ShopDraft => ({ ...draftFrom(STORED), ...changes });
 

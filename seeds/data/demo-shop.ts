@@ -1,0 +1,20 @@
+import type { ShopSettingsInput } from '../../src/shared/shop-contract';
+
+/**
+ * The demo shop's settings, an invented business. The standard rates are invented demo numbers:
+ * weeding fine lettering is the slow stage, packing the quick one.
+ */
+export const DEMO_SHOP: ShopSettingsInput = {
+  shopName: 'Bramble Yard Apparel',
+  address: 'Unit 4, Bramble Yard, Tanner Row, Hollinford',
+  phone: '01632 960412',
+  email: 'hello@brambleyard.example',
+  units: 'imperial',
+  timeZone: 'Europe/London',
+  shiftStart: '07:00',
+  shiftEnd: '15:30',
+  workingDays: [1, 2, 3, 4, 5],
+  standardRates: { cut: 120, weed: 30, press: 45, pack: 90 },
+  bagMaxPieces: 24,
+  heatExposureLimitS: 45,
+};
