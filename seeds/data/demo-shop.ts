@@ -14,6 +14,13 @@ export const DEMO_SHOP: ShopSettingsInput = {
   shiftStart: '07:00',
   shiftEnd: '15:30',
   workingDays: [1, 2, 3, 4, 5],
+  // The Christmas bank holidays of England and Wales that fall on weekdays (from memory).
+  closedDays: [
+    { date: '2026-12-25', note: 'Christmas Day' },
+    { date: '2026-12-28', note: 'Boxing Day (substitute day)' },
+    { date: '2027-12-27', note: 'Christmas Day (substitute day)' },
+    { date: '2027-12-28', note: 'Boxing Day (substitute day)' },
+  ],
   standardRates: { cut: 120, weed: 30, press: 45, pack: 90 },
   bagMaxPieces: 24,
   heatExposureLimitS: 45,

@@ -12,7 +12,7 @@ import type { Db, ShopSettingsRow, StationRow } from '../db/tables';
 import { HttpError } from '../http/http-error';
 import type { RollWithFilm } from '../rolls/roll-view';
 import { BoardRepository, type BoardBagRow, type FlagRow, type OpenOrderRow, type ShiftEventRow } from './board-repository';
-import { standardRatesOf } from '../shop/shop-view';
+import { closedDatesOf, standardRatesOf } from '../shop/shop-view';
 
 /** Millimetres in an inch, exactly (international inch, 1959). */
 const MM_PER_INCH = 25.4;
@@ -78,17 +78,18 @@ export class BoardService {
 
 /**
  * The shift on the floor (any day: work done on a day off still shows), the shift takt plans for (the next
- * working day's once it has ended), and the shop's working hours (its working days' shifts only).
+ * working day's once it has ended), and the shop's working hours (the shifts of its working days that are not closed days).
  */
 function shopTime(now: Date, settings: ShopSettingsRow): { shift: FloorShift; planShift: FloorShift; addWorkingHours: AddWorkingHours } {
   const { time_zone: zone, shift_start: start, shift_end: end } = settings;
   const workingDays = parseWorkingDays(settings.working_days);
+  const closedDays = closedDatesOf(settings);
   try {
     const shift = shiftWindow(now, zone, start, end);
     return {
       shift,
-      planShift: now.getTime() < Date.parse(shift.endAt) ? shift : nextShift(now, zone, start, end, workingDays),
-      addWorkingHours: shiftWorkingHours(zone, start, end, workingDays),
+      planShift: now.getTime() < Date.parse(shift.endAt) ? shift : nextShift(now, zone, start, end, workingDays, closedDays),
+      addWorkingHours: shiftWorkingHours(zone, start, end, workingDays, closedDays),
     };
   } catch (error) {
     if (!(error instanceof RangeError)) throw error;

@@ -15,6 +15,8 @@ export interface ShopSettingsRow {
   shift_end: string;
   /** ISO weekday numbers the shift runs on, e.g. '1,2,3,4,5' (see src/shared/shop-contract.ts). */
   working_days: string;
+  /** JSON list of {date: 'YYYY-MM-DD', note}: days the shift does not run although they are working days. */
+  closed_days: string;
   /** Good pieces per hour planned at each stage of work before the floor has shown its own rate. */
   standard_cut_per_hour: number;
   standard_weed_per_hour: number;

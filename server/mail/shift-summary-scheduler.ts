@@ -5,6 +5,7 @@ import type { MailSummary } from '../../src/shared/mail-contract';
 import { parseWorkingDays } from '../../src/shared/shop-contract';
 import type { Db } from '../db/tables';
 import { conflict } from '../http/http-error';
+import { closedDatesOf } from '../shop/shop-view';
 import { toMailSummary } from './mail-log-view';
 import type { MailOutbox } from './mail-outbox';
 import { MailRepository } from './mail-repository';
@@ -90,7 +91,7 @@ export class ShiftSummaryScheduler {
     const shop = await this.repository.shop();
     const ended = endedShift(now, shop.time_zone, shop.shift_start, shop.shift_end);
     if (!ended || (await this.repository.hasShiftSummary(ended.shiftDate))) return 0;
-    const workingDay = worksOn(parseWorkingDays(shop.working_days))(ended.shiftDate);
+    const workingDay = worksOn(parseWorkingDays(shop.working_days), closedDatesOf(shop))(ended.shiftDate);
     const key = `${ended.shiftDate} ${ended.endAt.toISOString()}`;
     if (!workingDay && this.quietShift === key) return 0;
     // The numbers as they stood a moment before the end, so the ended shift is still the board's shift.

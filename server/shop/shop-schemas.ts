@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { checkTimeZone, parseClock } from '../../src/shared/floor/shift-window';
+import { checkTimeZone, isRealDay, parseClock } from '../../src/shared/floor/shift-window';
 import { ISO_WEEKDAYS, SHOP_LIMITS, WEEKDAY_NAMES, type IsoWeekday } from '../../src/shared/shop-contract';
 
 const text = (what: string, max: number) =>
@@ -58,6 +58,24 @@ const workingDays = z
   })
   .transform((days): IsoWeekday[] => [...days].sort((a, b) => a - b));
 
+const closedDay = z.object(
+  {
+    date: z.string({ error: 'Write a closed day as YYYY-MM-DD, e.g. 2026-12-25.' }).refine(isRealDay, 'A closed day is a date that exists, written YYYY-MM-DD, e.g. 2026-12-25.'),
+    note: text('note on a closed day', SHOP_LIMITS.closedDayNoteMax).default(''),
+  },
+  { error: 'A closed day has a date and a note.' },
+);
+
+const closedDays = z
+  .array(closedDay, { error: 'Closed days are a list of dates with a note each.' })
+  .max(SHOP_LIMITS.closedDaysMax, `Keep at most ${SHOP_LIMITS.closedDaysMax} closed days: remove the ones that have passed.`)
+  .superRefine((days, ctx) => {
+    const dates = days.map((day) => day.date);
+    const twice = dates.find((date, index) => dates.indexOf(date) !== index);
+    if (twice !== undefined) ctx.addIssue({ code: 'custom', message: `Each closed day is listed once: ${twice} is there twice.` });
+  })
+  .transform((days) => [...days].sort((a, b) => a.date.localeCompare(b.date)));
+
 /**
  * PUT /api/shop: every setting, text trimmed. Fields the screen does not send (such as updatedAt) are
  * dropped, as every other body schema here does. A shift whose end is before its start runs past midnight.
@@ -73,6 +91,7 @@ export const shopSettingsInput = z
     shiftStart: timeOfDay('shift start'),
     shiftEnd: timeOfDay('shift end'),
     workingDays,
+    closedDays,
     standardRates: z.object(
       {
         cut: whole('The standard rate at cut', SHOP_LIMITS.standardRate),

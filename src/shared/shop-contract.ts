@@ -18,12 +18,23 @@ export const SHOP_LIMITS = {
   standardRate: { min: 1, max: 2000 },
   bagMaxPieces: { min: 1, max: 500 },
   heatExposureLimitS: { min: 5, max: 600 },
+  closedDaysMax: 60,
+  closedDayNoteMax: 80,
 } as const;
+
+/** A calendar day the shop is closed although it falls on a working day (a bank holiday, a stocktake). */
+export interface ClosedDay {
+  /** 'YYYY-MM-DD' in the shop's calendar. */
+  date: string;
+  /** Why, for the people reading the list ("Bank holiday"); may be empty. */
+  note: string;
+}
 
 /**
  * GET /api/shop (owner and lead) answers this; PUT /api/shop (owner only) takes it without `updatedAt`
  * and answers the stored settings. Times of day are the shop's wall clock, 'HH:MM'; a shift whose end
- * is not after its start runs past midnight. `workingDays` are the days the shift runs, sorted, at least one.
+ * is not after its start runs past midnight. `workingDays` are the days the shift runs, sorted, at least one;
+ * `closedDays` (at most closedDaysMax, each date once) are dates it does not run all the same.
  */
 export interface ShopSettings {
   shopName: string;
@@ -36,6 +47,8 @@ export interface ShopSettings {
   shiftStart: string;
   shiftEnd: string;
   workingDays: IsoWeekday[];
+  /** Days the shift does not run although they are working days, in date order. */
+  closedDays: ClosedDay[];
   /** Good pieces per hour each stage of work is planned at before the floor has shown its own rate. */
   standardRates: Record<StationKind, number>;
   /** Most pieces one job bag holds when an order's jobs are split into bags. */

@@ -116,6 +116,31 @@ describe('working hours on a shop\'s working days only', () => {
   });
 });
 
+describe('working hours around the shop\'s closed days', () => {
+  // England and Wales bank holidays at Christmas 2026: Friday 25 December, and Monday 28 December as the substitute
+  // for Boxing Day on a Saturday (from memory; the weekdays are checked against Intl below).
+  const CHRISTMAS = ['2026-12-25', '2026-12-28'];
+  const work = shiftWorkingHours(LONDON, '07:00', '15:30', MONDAY_TO_FRIDAY, CHRISTMAS);
+
+  it('uses weekdays checked against Intl.DateTimeFormat in the shop\'s zone', () => {
+    expect(londonWeekday('2026-12-24T12:00:00Z')).toBe('Thursday');
+    expect(londonWeekday('2026-12-25T12:00:00Z')).toBe('Friday');
+    expect(londonWeekday('2026-12-28T12:00:00Z')).toBe('Monday');
+  });
+
+  it('carries work left on Christmas Eve past the holiday weekend to Tuesday (hand-worked)', () => {
+    // Thursday 24 December 14:30 GMT + 3 h: 1 h to 15:30, then Friday (closed), the weekend and Monday (closed) are
+    // skipped; the other 2 h run from Tuesday 29 December 07:00 to 09:00.
+    expect(iso(work(at('2026-12-24T14:30:00Z'), 3))).toBe('2026-12-29T09:00:00.000Z');
+    // Without the closed days the same work ends on Friday the 25th at 09:00.
+    expect(iso(shiftWorkingHours(LONDON, '07:00', '15:30', MONDAY_TO_FRIDAY)(at('2026-12-24T14:30:00Z'), 3))).toBe('2026-12-25T09:00:00.000Z');
+  });
+
+  it('plans the next shift after Christmas Eve for Tuesday', () => {
+    expect(nextShift(new Date('2026-12-24T16:00:00Z'), LONDON, '07:00', '15:30', MONDAY_TO_FRIDAY, CHRISTMAS).startAt).toBe('2026-12-29T07:00:00.000Z');
+  });
+});
+
 describe('the next shift to plan for', () => {
   it('is today\'s shift before it starts and tomorrow\'s once it has', () => {
     expect(nextShift(new Date('2026-01-14T05:00:00Z'), LONDON, '07:00', '15:30', ISO_WEEKDAYS)).toMatchObject({ startAt: '2026-01-14T07:00:00.000Z', endAt: '2026-01-14T15:30:00.000Z' });

@@ -78,6 +78,22 @@ describe('changing the shop settings', () => {
     expect(await stored()).toMatchObject({ shop_name: 'Bramble Yard Apparel', shift_start: '07:30:00', shift_end: '16:00:00', working_days: '1,2,3,4,5,6', standard_weed_per_hour: 25, standard_pack_per_hour: 100 });
   });
 
+  it('keeps the closed days in date order with their notes trimmed, and an empty list empties them', async () => {
+    const closedDays = [
+      { date: '2027-04-02', note: '  Stocktake  ' },
+      { date: '2027-01-01', note: "New Year's Day" },
+    ];
+    const res = await save(owner, { ...(await currentInput()), closedDays }).expect(200);
+    expect(res.body.closedDays).toEqual([
+      { date: '2027-01-01', note: "New Year's Day" },
+      { date: '2027-04-02', note: 'Stocktake' },
+    ]);
+    expect(JSON.parse((await stored()).closed_days)).toEqual(res.body.closedDays);
+
+    const emptied = await save(owner, { ...(await currentInput()), closedDays: [] }).expect(200);
+    expect(emptied.body.closedDays).toEqual([]);
+  });
+
   it('accepts a shift that ends after midnight and spells a time zone the way the tz database does', async () => {
     const res = await save(owner, { ...(await currentInput()), shiftStart: '22:00', shiftEnd: '06:00', timeZone: 'america/new_york', units: 'metric' }).expect(200);
     // America/New_York is the IANA tz database's name for US Eastern time.
@@ -116,6 +132,8 @@ describe('changing the shop settings', () => {
     ['shiftEnd', { shiftStart: '07:00', shiftEnd: '07:00' }, /shift cannot end when it starts \(07:00\)/],
     ['shopName', { shopName: '   ' }, /Enter the shop's name/],
     ['units', { units: 'cubits' }, /Choose imperial .* or metric/],
+    ['closedDays.0.date', { closedDays: [{ date: '2026-02-30', note: '' }] }, /A closed day is a date that exists, written YYYY-MM-DD/],
+    ['closedDays', { closedDays: [{ date: '2026-12-25', note: 'Christmas Day' }, { date: '2026-12-25', note: 'Again' }] }, /Each closed day is listed once: 2026-12-25 is there twice/],
   ] as const)('answers 400 naming %s in a sentence for %j, and stores nothing', async (path, bad, sentence) => {
     const res = await save(owner, { ...(await currentInput()), ...bad });
     expect(res.status).toBe(400);

@@ -105,6 +105,44 @@ describe('ShopSettingsPage', () => {
     expect(saveButton()!.disabled).toBe(true);
   });
 
+  it('adds a closed day with its note, removes another, and sends the list in date order', async () => {
+    await openWithSettingsAs('owner');
+    const listed = () => [...page().querySelectorAll('[data-testid=closed-day]')].map((row) => row.getAttribute('data-date'));
+    expect(listed()).toEqual(['2026-12-25', '2026-12-28', '2027-12-27', '2027-12-28']);
+
+    await type('closed-date', '2027-01-01');
+    await type('closed-note', "New Year's Day");
+    byTestId<HTMLButtonElement>('closed-add')!.click();
+    await settle();
+    page().querySelector<HTMLButtonElement>('button[aria-label="Remove Mon 27 Dec 2027"]')!.click();
+    await settle();
+    expect(listed()).toEqual(['2026-12-25', '2026-12-28', '2027-01-01', '2027-12-28']);
+
+    saveButton()!.click();
+    const sent = http.expectOne({ method: 'PUT', url: '/api/shop' });
+    expect(sent.request.body.closedDays).toEqual([
+      { date: '2026-12-25', note: 'Christmas Day' },
+      { date: '2026-12-28', note: 'Boxing Day (substitute day)' },
+      { date: '2027-01-01', note: "New Year's Day" },
+      { date: '2027-12-28', note: 'Boxing Day (substitute day)' },
+    ]);
+    sent.flush({ ...STORED, closedDays: sent.request.body.closedDays });
+    await settle();
+    expect(byTestId('shop-confirmation')!.textContent).toContain('Shop settings saved.');
+  });
+
+  it('refuses a closed day that is already listed, with a sentence beside the date', async () => {
+    await openWithSettingsAs('owner');
+
+    await type('closed-date', '2026-12-25');
+    byTestId<HTMLButtonElement>('closed-add')!.click();
+    await settle();
+
+    expect(byTestId('problem-closed-add')!.textContent).toContain('2026-12-25 is already a closed day.');
+    expect(page().querySelectorAll('[data-testid=closed-day]')).toHaveLength(4);
+    expect(saveButton()!.disabled).toBe(true);
+  });
+
   it('shows a sentence beside the time zone and sends nothing for a zone the tablet does not know', async () => {
     await openWithSettingsAs('owner');
 

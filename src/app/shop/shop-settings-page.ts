@@ -11,10 +11,11 @@ import { MatInputModule } from '@angular/material/input';
 import { map } from 'rxjs';
 import { STATION_KINDS } from '../../shared/names';
 import type { ShopUnits } from '../../shared/press/units';
-import { ISO_WEEKDAYS, SHOP_LIMITS, WEEKDAY_NAMES, type IsoWeekday, type ShopSettings } from '../../shared/shop-contract';
+import { ISO_WEEKDAYS, SHOP_LIMITS, WEEKDAY_NAMES, type ClosedDay, type IsoWeekday, type ShopSettings } from '../../shared/shop-contract';
 import { Session } from '../auth/session';
 import { apiErrorSentence, hasStatus, type ApiErrorBody } from '../core/api-error';
 import { KIND_LABELS } from '../board/board-format';
+import { ClosedDays } from './closed-days';
 import { ShopApi } from './shop-api';
 import { RATE_FIELDS, checkShop, draftFrom, placeHubDetails, sameDraft, shiftCrossesMidnight, toggledDay, type ShopDraft, type ShopField, type ShopProblems } from './shop-values';
 import { matchingZones, zoneClock } from './time-zones';
@@ -37,6 +38,7 @@ const EMPTY_DRAFT: ShopDraft = {
   shiftStart: '',
   shiftEnd: '',
   workingDays: [],
+  closedDays: [],
   rateCut: '',
   rateWeed: '',
   ratePress: '',
@@ -54,7 +56,7 @@ function hubUnreachable(error: unknown): boolean {
 /** Shop settings: the owner edits the shop's details, hours, planning numbers and units; a lead reads them. */
 @Component({
   selector: 'dw-shop-settings',
-  imports: [ReactiveFormsModule, MatAutocompleteModule, MatButtonModule, MatButtonToggleModule, MatFormFieldModule, MatIconModule, MatInputModule],
+  imports: [ReactiveFormsModule, ClosedDays, MatAutocompleteModule, MatButtonModule, MatButtonToggleModule, MatFormFieldModule, MatIconModule, MatInputModule],
   templateUrl: './shop-settings-page.html',
   styleUrl: './shop-settings-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -87,6 +89,7 @@ export class ShopSettingsPage {
     shiftStart: [''],
     shiftEnd: [''],
     workingDays: new FormControl<IsoWeekday[]>([], { nonNullable: true }),
+    closedDays: new FormControl<ClosedDay[]>([], { nonNullable: true }),
     rateCut: [''],
     rateWeed: [''],
     ratePress: [''],
@@ -99,6 +102,7 @@ export class ShopSettingsPage {
   private readonly draft = toSignal(this.form.valueChanges.pipe(map(() => this.form.getRawValue())), { initialValue: EMPTY_DRAFT });
 
   protected readonly workingDays = computed(() => this.draft().workingDays);
+  protected readonly closedDays = computed(() => this.draft().closedDays);
   protected readonly changed = computed(() => {
     const stored = this.stored();
     return stored !== null && !sameDraft(this.draft(), draftFrom(stored));
@@ -131,6 +135,13 @@ export class ShopSettingsPage {
     const control = this.form.controls.workingDays;
     if (control.disabled) return;
     control.setValue(toggledDay(control.value, day));
+    control.markAsDirty();
+  }
+
+  protected closedDaysChanged(days: ClosedDay[]): void {
+    const control = this.form.controls.closedDays;
+    if (control.disabled) return;
+    control.setValue(days);
     control.markAsDirty();
   }
 
@@ -193,7 +204,7 @@ export class ShopSettingsPage {
 
   /** Brings the first sentence about a field into view, so a problem further down the page is not missed. */
   private showFirstProblem(): void {
-    afterNextRender(() => this.host.nativeElement.querySelector('.field-problem')?.scrollIntoView?.({ block: 'center', behavior: 'smooth' }), { injector: this.injector });
+    afterNextRender(() => this.host.nativeElement.querySelector('.dw-field-problem')?.scrollIntoView?.({ block: 'center', behavior: 'smooth' }), { injector: this.injector });
   }
 
   private clearConfirmationOnChange(): void {

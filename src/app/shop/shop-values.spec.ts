@@ -1,6 +1,6 @@
 import { getISODay } from 'date-fns';
 import { SHOP_LIMITS, WEEKDAY_NAMES, type IsoWeekday, type ShopSettings } from '../../shared/shop-contract';
-import { checkShop, draftFrom, placeHubDetails, sameDraft, shiftCrossesMidnight, toggledDay, type ShopDraft } from './shop-values';
+import { checkShop, closedDayProblem, draftFrom, placeHubDetails, sameDraft, shiftCrossesMidnight, toggledDay, type ShopDraft } from './shop-values';
 import { DEMO_SHOP } from '../../../seeds/data/demo-shop';
 
 // The demo shop (an invented business), as the hub would answer it.
@@ -106,6 +106,17 @@ describe('shop values', () => {
     expect(sameDraft(draft(), draft({ shopName: 'Bramble Yard Apparel ', workingDays: [5, 4, 3, 2, 1] }))).toBe(true);
     expect(sameDraft(draft(), draft({ workingDays: [1, 2, 3, 4, 5, 6] }))).toBe(false);
     expect(sameDraft(draft(), draft({ units: 'metric' }))).toBe(false);
+  });
+
+  it('takes a closed day that exists and is not listed yet, and counts only a real change to the list as unsaved', () => {
+    const listed = STORED.closedDays;
+    expect(closedDayProblem(listed, '2027-01-01', "New Year's Day")).toBeNull();
+    expect(closedDayProblem(listed, '2026-12-25', '')).toBe('2026-12-25 is already a closed day.');
+    expect(closedDayProblem(listed, '2027-02-29', '')).toBe('Pick the date the shop is closed.'); // 2027 is no leap year (Gregorian calendar)
+    expect(closedDayProblem(listed, '', '')).toBe('Pick the date the shop is closed.');
+    expect(closedDayProblem(listed, '2027-01-01', 'x'.repeat(SHOP_LIMITS.closedDayNoteMax + 1))).toContain(`at most ${SHOP_LIMITS.closedDayNoteMax} characters`);
+    expect(sameDraft(draft(), draft({ closedDays: [...listed].reverse() }))).toBe(true);
+    expect(sameDraft(draft(), draft({ closedDays: listed.slice(1) }))).toBe(false);
   });
 
   it('places the hub refusals by field and keeps the ones naming no field', () => {

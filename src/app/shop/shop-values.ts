@@ -1,5 +1,6 @@
 import { STATION_KINDS, type StationKind } from '../../shared/names';
-import { ISO_WEEKDAYS, SHOP_LIMITS, type IsoWeekday, type ShopSettings, type ShopSettingsInput } from '../../shared/shop-contract';
+import { isRealDay } from '../../shared/floor/shift-window';
+import { ISO_WEEKDAYS, SHOP_LIMITS, type ClosedDay, type IsoWeekday, type ShopSettings, type ShopSettingsInput } from '../../shared/shop-contract';
 import type { ShopUnits } from '../../shared/press/units';
 import { knownTimeZone } from './time-zones';
 
@@ -13,6 +14,7 @@ export interface ShopDraft {
   shiftStart: string;
   shiftEnd: string;
   workingDays: IsoWeekday[];
+  closedDays: ClosedDay[];
   /** Standard good pieces per hour at each stage of work. */
   rateCut: string;
   rateWeed: string;
@@ -41,6 +43,7 @@ const SHOP_FIELDS: readonly ShopField[] = [
   'shiftStart',
   'shiftEnd',
   'workingDays',
+  'closedDays',
   'rateCut',
   'rateWeed',
   'ratePress',
@@ -70,6 +73,7 @@ export function draftFrom(settings: ShopSettings): ShopDraft {
     shiftStart: settings.shiftStart.slice(0, 5),
     shiftEnd: settings.shiftEnd.slice(0, 5),
     workingDays: ISO_WEEKDAYS.filter((day) => settings.workingDays.includes(day)),
+    closedDays: sortedClosedDays(settings.closedDays),
     rateCut: String(settings.standardRates.cut),
     rateWeed: String(settings.standardRates.weed),
     ratePress: String(settings.standardRates.press),
@@ -86,7 +90,22 @@ export function sameDraft(a: ShopDraft, b: ShopDraft): boolean {
 }
 
 function comparable(value: ShopDraft[ShopField]): string {
-  return Array.isArray(value) ? [...value].sort((x, y) => x - y).join(',') : value.trim();
+  if (!Array.isArray(value)) return value.trim();
+  return value.every((item) => typeof item === 'number') ? [...value].sort((x, y) => x - y).join(',') : JSON.stringify(sortedClosedDays(value as ClosedDay[]));
+}
+
+/** Closed days in date order, notes trimmed. */
+export function sortedClosedDays(days: readonly ClosedDay[]): ClosedDay[] {
+  return days.map(({ date, note }) => ({ date, note: note.trim() })).sort((a, b) => a.date.localeCompare(b.date));
+}
+
+/** Why a closed day cannot be added to the list, or null when it can. */
+export function closedDayProblem(days: readonly ClosedDay[], date: string, note: string): string | null {
+  if (!isRealDay(date)) return 'Pick the date the shop is closed.';
+  if (days.some((day) => day.date === date)) return `${date} is already a closed day.`;
+  if (days.length >= SHOP_LIMITS.closedDaysMax) return `Keep at most ${SHOP_LIMITS.closedDaysMax} closed days: remove the ones that have passed.`;
+  if (note.trim().length > SHOP_LIMITS.closedDayNoteMax) return `A note is at most ${SHOP_LIMITS.closedDayNoteMax} characters.`;
+  return null;
 }
 
 /** True when the shift ends before it starts on the clock, so it ends on the next day (the hub refuses an end equal to the start). */
@@ -138,6 +157,8 @@ export function checkShop(draft: ShopDraft): ShopCheck {
   else if (draft.shiftEnd === draft.shiftStart) problems.shiftEnd = `The shift cannot end when it starts (${draft.shiftStart}): give it a different end time.`;
   const workingDays = ISO_WEEKDAYS.filter((day) => draft.workingDays.includes(day));
   if (workingDays.length === 0) problems.workingDays = 'Pick at least one day the shop works.';
+  const closedDays = sortedClosedDays(draft.closedDays);
+  if (closedDays.length > SHOP_LIMITS.closedDaysMax) problems.closedDays = `Keep at most ${SHOP_LIMITS.closedDaysMax} closed days: remove the ones that have passed.`;
 
   const standardRates = Object.fromEntries(
     STATION_KINDS.map((kind) => [kind, whole(draft[RATE_FIELDS[kind]] as string, SHOP_LIMITS.standardRate, `The standard rate at ${kind}`, RATE_FIELDS[kind], problems)]),
@@ -159,6 +180,7 @@ export function checkShop(draft: ShopDraft): ShopCheck {
       shiftStart: draft.shiftStart,
       shiftEnd: draft.shiftEnd,
       workingDays,
+      closedDays,
       standardRates,
       bagMaxPieces,
       heatExposureLimitS,

@@ -92,15 +92,23 @@ export function shiftOnDay(day: string, timeZone: string, shiftStart: string, sh
 }
 
 /**
- * The next shift on a working day to start after `now` (for planning the day ahead once the current one
- * has ended). No working days at all is read as every day.
+ * The next shift on a working day that is not a closed day to start after `now` (for planning the day
+ * ahead once the current one has ended). No working days at all is read as every day.
  */
-export function nextShift(now: Date, timeZone: string, shiftStart: string, shiftEnd: string, workingDays: readonly IsoWeekday[]): FloorShift {
+export function nextShift(
+  now: Date,
+  timeZone: string,
+  shiftStart: string,
+  shiftEnd: string,
+  workingDays: readonly IsoWeekday[],
+  closedDays: readonly string[] = [],
+): FloorShift {
   checkTimeZone(timeZone);
-  const works = worksOn(workingDays);
+  const works = worksOn(workingDays, closedDays);
   const today = localDate(now, timeZone);
-  // Eight days from today reach the next working day's shift even when today's has already started.
-  for (let offset = 0; offset <= 7; offset++) {
+  // A week and a day from today reach the next working day's shift even when today's has already started;
+  // every closed day can push it one day further.
+  for (let offset = 0; offset <= 7 + closedDays.length; offset++) {
     const day = addDays(today, offset);
     if (!works(day)) continue;
     const shift = shiftOnDay(day, timeZone, shiftStart, shiftEnd);
@@ -117,11 +125,14 @@ export function isoWeekdayOf(day: string): IsoWeekday {
   return (sundayIsZero === 0 ? 7 : sundayIsZero) as IsoWeekday;
 }
 
-/** Whether a shift starting on a calendar day runs, given the shop's working days; none at all is read as every day. */
-export function worksOn(workingDays: readonly IsoWeekday[]): (day: string) => boolean {
-  if (workingDays.length === 0) return () => true;
-  const days = new Set(workingDays);
-  return (day) => days.has(isoWeekdayOf(day));
+/**
+ * Whether a shift starting on a calendar day runs: on the shop's working days (none at all is read as
+ * every day), except its closed days ('YYYY-MM-DD').
+ */
+export function worksOn(workingDays: readonly IsoWeekday[], closedDays: readonly string[] = []): (day: string) => boolean {
+  const days = new Set(workingDays.length === 0 ? [1, 2, 3, 4, 5, 6, 7] : workingDays);
+  const closed = new Set(closedDays);
+  return (day) => days.has(isoWeekdayOf(day)) && !closed.has(day);
 }
 
 function wallClock(year: number, month: number, date: number, hours: number, minutes: number, seconds: number, timeZone: string): Date {

@@ -16,10 +16,16 @@ const MAX_DAYS = 400;
  * in its time zone: work left at the end of a shift carries over to the next working day's shift start.
  * A shift belongs to the day it starts on (an overnight shift from Friday night runs into Saturday).
  * Days are stepped as local calendar days, so a shift on the day the clocks change keeps its wall-clock
- * times. No working days at all is read as every day.
+ * times. No working days at all is read as every day; closed days ('YYYY-MM-DD') do not work.
  */
-export function shiftWorkingHours(timeZone: string, shiftStart: string, shiftEnd: string, workingDays: readonly IsoWeekday[]): AddWorkingHours {
-  const works = worksOn(workingDays);
+export function shiftWorkingHours(
+  timeZone: string,
+  shiftStart: string,
+  shiftEnd: string,
+  workingDays: readonly IsoWeekday[],
+  closedDays: readonly string[] = [],
+): AddWorkingHours {
+  const works = worksOn(workingDays, closedDays);
   return (fromMs, hours) => {
     let left = hours * HOUR_MS;
     let at = fromMs;
