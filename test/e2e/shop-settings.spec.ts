@@ -5,8 +5,8 @@ import { signInWithEmail } from './support/floor-steps';
 import { screenshotAt } from './support/screenshots';
 
 // Manual: how the owner keeps the shop's settings. The owner opens Shop settings, is stopped by a
-// time zone that does not exist, opens the shop on Saturdays and moves the shift's end to 16:00, and
-// saves. The lead's Floor board, open on another tablet, takes the new hours at once; the lead can
+// time zone that does not exist, opens the shop on Saturdays, moves the shift's end to 16:00, adds a
+// closed day for a stocktake, and saves. The lead's Floor board, open on another tablet, takes the new hours at once; the lead can
 // read the settings but not change them.
 
 // The demo shop is in London; the tablets show its clock.
@@ -49,17 +49,22 @@ test('the owner opens Saturdays and a longer shift; the lead\'s board follows at
       expect(stored.timeZone).toBe('Europe/London');
     });
 
-    await test.step('the owner puts London back, opens Saturdays, ends the shift at 16:00 and saves', async () => {
+    await test.step('the owner puts London back, opens Saturdays, ends the shift at 16:00, closes for a stocktake and saves', async () => {
       await page.getByTestId('time-zone').fill('Europe/London');
       await page.getByTestId('time-zone').press('Escape');
       await page.getByRole('button', { name: 'Saturday' }).click();
       await expect(page.getByRole('button', { name: 'Saturday' })).toHaveAttribute('aria-pressed', 'true');
       await page.getByTestId('shift-end').fill('16:00');
+      await page.getByTestId('closed-date').fill('2027-04-02');
+      await page.getByTestId('closed-note').fill('Stocktake');
+      await page.getByTestId('closed-add').click();
+      await expect(page.locator('[data-testid=closed-day][data-date="2027-04-02"]')).toContainText('Stocktake');
       await page.getByTestId('shop-save').click();
       await expect(page.getByTestId('shop-confirmation')).toHaveText('Shop settings saved.');
       await expect(page.getByTestId('problem-timeZone')).toHaveCount(0);
       const stored = (await (await page.request.get('/api/shop')).json()) as ShopSettings;
       expect(stored).toMatchObject({ timeZone: 'Europe/London', shiftEnd: '16:00', workingDays: [1, 2, 3, 4, 5, 6] });
+      expect(stored.closedDays).toContainEqual({ date: '2027-04-02', note: 'Stocktake' });
     });
 
     await test.step('the lead\'s board takes the new hours without a reload', async () => {
